@@ -1,0 +1,24 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity('import_job')
+@Index(['scopeType', 'scopeId'])
+export class ImportJob {
+  @PrimaryGeneratedColumn({ type: 'int' }) id: number;
+  @Column({ type: 'varchar', length: 16 }) kind: string;
+  @Column({ type: 'varchar', length: 8, name: 'scope_type' }) scopeType: 'rabbitry' | 'club';
+  @Column({ type: 'int', name: 'scope_id' }) scopeId: number;
+  @Column({ type: 'int', name: 'user_id' }) userId: number;
+  @Column({ type: 'varchar', length: 255, name: 'file_name' }) fileName: string;
+  @Column({ type: 'varchar', length: 12 }) status: 'running' | 'done' | 'failed';
+  @Column({ type: 'int', name: 'total_rows', default: 0 }) totalRows: number;
+  @Column({ type: 'int', name: 'processed_rows', default: 0 }) processedRows: number;
+  @Column({ type: 'int', name: 'new_rows', default: 0 }) newRows: number;
+  @Column({ type: 'int', name: 'duplicate_rows', default: 0 }) duplicateRows: number;
+  @Column({ type: 'int', name: 'error_rows', default: 0 }) errorRows: number;
+  @Column({ type: 'json', nullable: true }) mapping: Record<string, string> | null;
+  /** Row-level problems as CSV, downloadable from the import history. */
+  @Column({ type: 'longtext', name: 'error_report', nullable: true }) errorReport: string | null;
+  @Column({ type: 'varchar', length: 500, nullable: true }) message: string | null;
+  @CreateDateColumn({ type: 'datetime', name: 'started_at' }) startedAt: Date;
+  @Column({ type: 'datetime', name: 'finished_at', nullable: true }) finishedAt: Date | null;
+}
