@@ -3,79 +3,17 @@ import type TestAgent from 'supertest/lib/agent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadDemo } from '../../analytics-api/src/demo/load-demo';
 import { resetDatabase, signIn, startTestApp, type TestApp } from '../support/test-app';
+import { foundationRows } from './matrix/foundation-rows';
+import { ACTORS, ALL_NAMES, EMAIL, VISIBLE, type Actor, type Ids, type Row } from './matrix/matrix-types';
 
 /**
  * Access matrix: every route × every role, allowed or refused, and no data of a rabbitry or
  * club the caller may not see in any answer. Every route that exists must have a row here
  * (the first test fails otherwise), so each new route joins the matrix.
  */
-type Actor = 'anonymous' | 'admin' | 'owner' | 'partner' | 'mentor' | 'officer' | 'member' | 'other-club';
-const ACTORS: Actor[] = ['anonymous', 'admin', 'owner', 'partner', 'mentor', 'officer', 'member', 'other-club'];
-const SIGNED_IN: Actor[] = ACTORS.filter((a) => a !== 'anonymous');
-
-interface Ids { r1: number; r2: number; c1: number; c2: number; user: (email: string) => number }
-interface Row {
-  allowed: Actor[];
-  path: (ids: Ids) => string;
-  body?: (ids: Ids, actor: Actor) => object;
-  /** Changes state: each allowed actor gets a freshly loaded demo. */
-  mutates?: boolean;
-}
-
-// Demo layout (analytics-api/src/demo/load-demo.ts): rabbitry r1 "Fenwick Hollow" has owner,
-// partner and mentor; r2 "Castellan Meadow" is owned by the officer. Club c1 has the officer,
-// the owner and the member; c2 belongs to other-club alone.
+// Rows come from one file per feature; a new feature adds its file here.
 const MATRIX: Record<string, Row> = {
-  'get /health': { allowed: ACTORS, path: () => '/api/health' },
-  'get /csrf': { allowed: ACTORS, path: () => '/api/csrf' },
-  // Signing in is allowed to whoever holds the account's password; without it, 401.
-  'post /session': {
-    allowed: SIGNED_IN, path: () => '/api/session', mutates: true,
-    body: (_i, actor) => (actor === 'anonymous' ? { email: 'owner@example.test', password: 'not-the-password' } : { email: EMAIL[actor], password: 'keeperline-demo' }),
-  },
-  'get /session': { allowed: SIGNED_IN, path: () => '/api/session' },
-  'delete /session': { allowed: SIGNED_IN, path: () => '/api/session', mutates: true },
-  'patch /me/preferences': { allowed: SIGNED_IN, path: () => '/api/me/preferences', body: () => ({ weightUnit: 'kg' }), mutates: true },
-  'get /rabbitries': { allowed: SIGNED_IN, path: () => '/api/rabbitries' },
-  'post /rabbitries': { allowed: SIGNED_IN, path: () => '/api/rabbitries', body: () => ({ name: 'Matrix Test Herd' }), mutates: true },
-  'get /rabbitries/:rabbitryId': { allowed: ['admin', 'owner', 'partner', 'mentor'], path: (i) => `/api/rabbitries/${i.r1}` },
-  'patch /rabbitries/:rabbitryId': { allowed: ['admin', 'owner', 'partner'], path: (i) => `/api/rabbitries/${i.r1}`, body: () => ({ location: 'Elsewhere' }), mutates: true },
-  'delete /rabbitries/:rabbitryId': { allowed: ['admin', 'owner'], path: (i) => `/api/rabbitries/${i.r1}`, mutates: true },
-  'get /rabbitries/:rabbitryId/members': { allowed: ['admin', 'owner', 'partner', 'mentor'], path: (i) => `/api/rabbitries/${i.r1}/members` },
-  'post /rabbitries/:rabbitryId/members': {
-    allowed: ['admin', 'owner'], path: (i) => `/api/rabbitries/${i.r1}/members`,
-    body: () => ({ email: 'member@example.test', role: 'mentor' }), mutates: true,
-  },
-  'delete /rabbitries/:rabbitryId/members/:userId': {
-    allowed: ['admin', 'owner'], path: (i) => `/api/rabbitries/${i.r1}/members/${i.user('mentor@example.test')}`, mutates: true,
-  },
-  'get /clubs': { allowed: SIGNED_IN, path: () => '/api/clubs' },
-  'get /clubs/:clubId': { allowed: ['admin', 'officer', 'owner', 'member'], path: (i) => `/api/clubs/${i.c1}` },
-  'get /clubs/:clubId/members': { allowed: ['admin', 'officer', 'owner', 'member'], path: (i) => `/api/clubs/${i.c1}/members` },
-  'post /clubs/:clubId/members': {
-    allowed: ['admin', 'officer'], path: (i) => `/api/clubs/${i.c1}/members`,
-    body: () => ({ email: 'partner@example.test', role: 'member' }), mutates: true,
-  },
-  'delete /clubs/:clubId/members/:userId': {
-    allowed: ['admin', 'officer'], path: (i) => `/api/clubs/${i.c1}/members/${i.user('member@example.test')}`, mutates: true,
-  },
-};
-
-// What each actor may see; every other rabbitry or club name must be absent from its answers.
-const VISIBLE: Record<Actor, string[]> = {
-  anonymous: [],
-  admin: ['Fenwick Hollow', 'Castellan Meadow', 'Brackenford Valley Rabbit Club', 'Lowmere Coast Fanciers'],
-  owner: ['Fenwick Hollow', 'Brackenford Valley Rabbit Club'],
-  partner: ['Fenwick Hollow'],
-  mentor: ['Fenwick Hollow'],
-  officer: ['Castellan Meadow', 'Brackenford Valley Rabbit Club'],
-  member: ['Brackenford Valley Rabbit Club'],
-  'other-club': ['Lowmere Coast Fanciers'],
-};
-const ALL_NAMES = VISIBLE.admin;
-const EMAIL: Record<Exclude<Actor, 'anonymous'>, string> = {
-  admin: 'admin@example.test', owner: 'owner@example.test', partner: 'partner@example.test', mentor: 'mentor@example.test',
-  officer: 'officer@example.test', member: 'member@example.test', 'other-club': 'other-club@example.test',
+  ...foundationRows,
 };
 
 let t: TestApp;
