@@ -15,6 +15,8 @@ import { SessionService } from './auth/session.service';
 import { registerClubRoutes } from './clubs/clubs.router';
 import { ClubsService } from './clubs/clubs.service';
 import { registerHealthRoutes } from './health/health.router';
+import { registerImportRoutes } from './imports/imports.router';
+import { ImportsService } from './imports/imports.service';
 import { errorHandler, notFoundHandler } from './http/error-handlers';
 import { registerRabbitryRoutes } from './rabbitries/rabbitries.router';
 import { RabbitriesService } from './rabbitries/rabbitries.service';
@@ -88,6 +90,7 @@ export function createApp(config: Config, db: DataSource): AppContext {
   });
   registerRabbitryRoutes(api, new RabbitriesService(db));
   registerClubRoutes(api, new ClubsService(db));
+  registerImportRoutes(api, new ImportsService(db, config.DATA_DIR), { dataDir: config.DATA_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB });
   app.use('/api', api.router);
   app.use('/api', notFoundHandler);
 

@@ -28,7 +28,11 @@ export async function loadDemo(db: DataSource): Promise<void> {
     const id = (role: string) => users.get(role)!;
     await tx.getRepository(Breed).save({
       name: 'Mini Rex', classScheme: 'four-class', varieties: ['Black', 'Blue', 'Castor', 'Broken'],
-      weightLimits: { senior: { buck: { minGrams: 1588, idealGrams: 1928, maxGrams: 2041 }, doe: { minGrams: 1588, idealGrams: 1928, maxGrams: 2155 } } },
+      // Values from memory for the fixture only — check against the current official standard.
+      weightLimits: {
+        buck: { junior: { minGrams: 680, idealGrams: null, maxGrams: 1588 }, intermediate: null, senior: { minGrams: 1588, idealGrams: 1928, maxGrams: 2041 } },
+        doe: { junior: { minGrams: 680, idealGrams: null, maxGrams: 1588 }, intermediate: null, senior: { minGrams: 1588, idealGrams: 1928, maxGrams: 2155 } },
+      },
       evaluationTemplate: { traits: [{ key: 'body_type', label: 'Body type', points: 50 }, { key: 'fur', label: 'Fur', points: 35 }, { key: 'condition', label: 'Condition', points: 15 }] },
       sourceNote: 'from memory — check against the current official standard',
     });

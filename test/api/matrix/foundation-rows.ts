@@ -1,9 +1,9 @@
-import { ACTORS, EMAIL, SIGNED_IN, type Row } from './matrix-types';
+import { ACTORS, EMAIL, SIGNED_IN, type MatrixFeature } from './matrix-types';
 
 // Demo layout (analytics-api/src/demo/load-demo.ts): rabbitry r1 "Fenwick Hollow" has owner,
 // partner and mentor; r2 "Castellan Meadow" is owned by the officer. Club c1 has the officer,
 // the owner and the member; c2 belongs to other-club alone.
-export const foundationRows: Record<string, Row> = {
+export const foundation: MatrixFeature = { rows: {
   'get /health': { allowed: ACTORS, path: () => '/api/health' },
   'get /csrf': { allowed: ACTORS, path: () => '/api/csrf' },
   // Signing in is allowed to whoever holds the account's password; without it, 401.
@@ -37,5 +37,4 @@ export const foundationRows: Record<string, Row> = {
   'delete /clubs/:clubId/members/:userId': {
     allowed: ['admin', 'officer'], path: (i) => `/api/clubs/${i.c1}/members/${i.user('member@example.test')}`, mutates: true,
   },
-};
-
+} };

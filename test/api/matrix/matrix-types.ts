@@ -1,13 +1,27 @@
+import type { DataSource } from 'typeorm';
 /** Shared vocabulary of the access matrix (test/api/access-matrix.spec.ts). */
 export type Actor = 'anonymous' | 'admin' | 'owner' | 'partner' | 'mentor' | 'officer' | 'member' | 'other-club';
 export const ACTORS: Actor[] = ['anonymous', 'admin', 'owner', 'partner', 'mentor', 'officer', 'member', 'other-club'];
 export const SIGNED_IN: Actor[] = ACTORS.filter((a) => a !== 'anonymous');
 
-export interface Ids { r1: number; r2: number; c1: number; c2: number; user: (email: string) => number }
+export interface Ids {
+  r1: number; r2: number; c1: number; c2: number;
+  user: (email: string) => number;
+  /** Ids of the records that features' fixtures created (animalId, jobId, …). */
+  fixture: Record<string, number>;
+}
+
+/** A feature's part of the matrix: its rows, and the records they need on top of the demo. */
+export interface MatrixFeature {
+  rows: Record<string, Row>;
+  fixture?: (db: DataSource, ids: Ids) => Promise<Record<string, number>>;
+}
 export interface Row {
   allowed: Actor[];
   path: (ids: Ids) => string;
   body?: (ids: Ids, actor: Actor) => object;
+  /** Statuses an allowed caller may get besides 2xx (the route's own answer past the access check). */
+  expect?: number[];
   /** Changes state: each allowed actor gets a freshly loaded demo. */
   mutates?: boolean;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import type { ImportCheckOptions, ImportStatus, ImportSummary } from '@shared/contracts/imports';
 
 @Entity('import_job')
 @Index(['scopeType', 'scopeId'])
@@ -9,7 +10,7 @@ export class ImportJob {
   @Column({ type: 'int', name: 'scope_id' }) scopeId: number;
   @Column({ type: 'int', name: 'user_id' }) userId: number;
   @Column({ type: 'varchar', length: 255, name: 'file_name' }) fileName: string;
-  @Column({ type: 'varchar', length: 12 }) status: 'running' | 'done' | 'failed';
+  @Column({ type: 'varchar', length: 12 }) status: ImportStatus;
   @Column({ type: 'int', name: 'total_rows', default: 0 }) totalRows: number;
   @Column({ type: 'int', name: 'processed_rows', default: 0 }) processedRows: number;
   @Column({ type: 'int', name: 'new_rows', default: 0 }) newRows: number;
@@ -19,6 +20,15 @@ export class ImportJob {
   /** Row-level problems as CSV, downloadable from the import history. */
   @Column({ type: 'longtext', name: 'error_report', nullable: true }) errorReport: string | null;
   @Column({ type: 'varchar', length: 500, nullable: true }) message: string | null;
+  /** The uploaded file, kept under the data folder until the import is done. */
+  @Column({ type: 'varchar', length: 500, name: 'file_path', nullable: true }) filePath: string | null;
+  @Column({ type: 'varchar', length: 20, nullable: true }) encoding: string | null;
+  @Column({ type: 'varchar', length: 4, nullable: true }) delimiter: string | null;
+  @Column({ type: 'json', nullable: true }) headers: string[] | null;
+  @Column({ type: 'json', name: 'sample_rows', nullable: true }) sampleRows: string[][] | null;
+  @Column({ type: 'json', name: 'suggested_mapping', nullable: true }) suggestedMapping: Record<string, string> | null;
+  @Column({ type: 'json', nullable: true }) options: ImportCheckOptions | null;
+  @Column({ type: 'json', nullable: true }) summary: ImportSummary | null;
   @CreateDateColumn({ type: 'datetime', name: 'started_at' }) startedAt: Date;
   @Column({ type: 'datetime', name: 'finished_at', nullable: true }) finishedAt: Date | null;
 }
