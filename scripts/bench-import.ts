@@ -50,7 +50,7 @@ try {
   const sampler = setInterval(() => { peak = Math.max(peak, process.memoryUsage().rss); }, 50);
   t0 = performance.now();
   const copy = join(dir, 'upload.csv');
-  await new Promise((res) => createReadStream(csv).pipe(createWriteStream(copy)).on('finish', res));
+  await new Promise((res) => createReadStream(csv).pipe(createWriteStream(copy)).on('finish', () => res(undefined)));
   const tCopy = performance.now();
   const job = await service.upload(scope, userId, 'results', { path: copy, originalname: 'results.csv' });
   const tUpload = performance.now();
@@ -100,5 +100,5 @@ async function writeResults(path: string, rows: number) {
     }
     classNo++;
   }
-  await new Promise((r) => out.end(r));
+  await new Promise<void>((r) => out.end(() => r()));
 }

@@ -97,20 +97,48 @@ function textStream(path: string, encoding: CsvEncoding): Readable {
 }
 
 /**
- * Streams the data rows (after the header) as arrays of cells, with their line number in the
- * file as a spreadsheet shows it (header = 1). Quoted fields may hold delimiters and newlines.
- * Backpressure comes from the async iteration. O(file size) time, O(1) memory.
+ * Streams the data rows (after the header) in chunks of arrays of cells, numbered as a
+ * spreadsheet shows them (header = 1; lines of nothing but spaces are left out). Quoted fields may hold delimiters and newlines. Papa Parse
+ * hands over a chunk of rows at a time and is paused until the consumer has taken them, so
+ * memory stays bounded. O(file size) time.
  */
-export async function* csvRows(path: string, shape: Pick<CsvShape, 'encoding' | 'delimiter'>): AsyncGenerator<{ row: number; cells: string[] }> {
-  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { delimiter: shape.delimiter, skipEmptyLines: 'greedy' }) as unknown as NodeJS.ReadWriteStream;
-  const input = textStream(path, shape.encoding);
-  input.on('error', (e) => parser.emit('error', e));
-  input.pipe(parser as unknown as NodeJS.WritableStream);
-  let row = 0;
-  for await (const cells of parser as AsyncIterable<string[]>) {
-    row++;
-    if (row === 1) continue;
-    yield { row, cells };
+export async function* csvRows(path: string, shape: Pick<CsvShape, 'encoding' | 'delimiter'>): AsyncGenerator<{ firstRow: number; rows: string[][] }> {
+  const chunks: string[][][] = [];
+  let parser: Papa.Parser | null = null;
+  let finished = false;
+  let failure: Error | null = null;
+  let wake: (() => void) | null = null;
+  const signal = () => { const w = wake; wake = null; w?.(); };
+  Papa.parse(textStream(path, shape.encoding) as unknown as File, {
+    delimiter: shape.delimiter,
+    skipEmptyLines: true,
+    chunkSize: 1 << 20,
+    chunk: (res: Papa.ParseResult<string[]>, p: Papa.Parser) => {
+      parser = p;
+      p.pause();
+      chunks.push(res.data);
+      signal();
+    },
+    complete: () => { finished = true; signal(); },
+    error: (e: Error) => { failure = e; signal(); },
+  });
+  // Rows go out a chunk at a time: one await per row would cost more than the parsing.
+  let row = 1;
+  let header = true;
+  for (;;) {
+    const next = chunks.shift();
+    if (next) {
+      let rows = next;
+      if (header) { rows = rows.slice(1); header = false; }
+      rows = rows.filter((cells) => cells.length > 1 || cells[0].trim() !== '');
+      yield { firstRow: row + 1, rows };
+      row += rows.length;
+      if (!finished) (parser as Papa.Parser | null)?.resume();
+      continue;
+    }
+    if (failure) throw failure;
+    if (finished) return;
+    await new Promise<void>((r) => { wake = r; });
   }
 }
 

@@ -18,7 +18,6 @@ import { ResultsImporter } from './results-importer';
 
 export type Scope = { type: 'rabbitry' | 'club'; id: number };
 const PROBLEMS_IN_SUMMARY = 200;
-const PROGRESS_EVERY_ROWS = 20_000;
 
 export const kindsFor = (scope: Scope['type']): ImportKindKey[] =>
   scope === 'club' ? ['results'] : ['animals', 'weights', 'litters', 'evaluations'];
@@ -170,22 +169,25 @@ export class ImportsService {
     const map = mapper(job.headers!, job.options!.mapping);
     let total = 0;
     let duplicatesInFile = 0;
-    for await (const { row, cells } of csvRows(job.filePath!, { encoding: job.encoding as 'utf-8', delimiter: job.delimiter! })) {
-      total++;
-      if (total % PROGRESS_EVERY_ROWS === 0) await this.db.getRepository(ImportJob).update({ id: job.id }, { processedRows: total });
-      const v = importer.validate(map(cells));
-      for (const e of v.errors) report.problem(row, e.field, e.message, 'error');
-      for (const w of v.warnings) report.problem(row, w.field, w.message, 'warning');
-      if (!v.value) continue;
-      const hash = dedupeHash(dedupeKey(job.kind as ImportKindKey, v.value));
-      const first = seen.get(hash);
-      if (first !== undefined) {
-        duplicatesInFile++;
-        report.problem(row, '', `the same record as row ${first}: counted once`, 'warning');
-        continue;
+    for await (const chunk of csvRows(job.filePath!, { encoding: job.encoding as 'utf-8', delimiter: job.delimiter! })) {
+      for (let i = 0; i < chunk.rows.length; i++) {
+        const row = chunk.firstRow + i;
+        const v = importer.validate(map(chunk.rows[i]));
+        for (const e of v.errors) report.problem(row, e.field, e.message, 'error');
+        for (const w of v.warnings) report.problem(row, w.field, w.message, 'warning');
+        if (!v.value) continue;
+        const hash = dedupeHash(dedupeKey(job.kind as ImportKindKey, v.value));
+        const first = seen.get(hash);
+        if (first !== undefined) {
+          duplicatesInFile++;
+          report.problem(row, '', `the same record as row ${first}: counted once`, 'warning');
+          continue;
+        }
+        seen.set(hash, row);
+        importer.accept(v.value, row, hash, report);
       }
-      seen.set(hash, row);
-      importer.accept(v.value, row, hash, report);
+      total += chunk.rows.length;
+      await this.db.getRepository(ImportJob).update({ id: job.id }, { processedRows: total });
     }
     await importer.finishCheck(report);
     if (total === 0) throw new AppError('no-rows', 'The file has no rows of data', 400);
