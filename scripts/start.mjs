@@ -81,5 +81,5 @@ printDemoAccounts();
 
 function printDemoAccounts() {
   log(`open http://127.0.0.1:${dev ? port + 10 : port}  (Ctrl-C stops the app and the database)`);
-  log('demo accounts (password: keeperline-demo): admin@, owner@, partner@, mentor@, officer@, member@, other-club@example.test');
+  log('demo accounts (password keeperline-demo): admin@, owner@, partner@, mentor@, officer@, member@, other-club@example.test');
 }
