@@ -72,7 +72,7 @@ export class ResultsImporter implements KindImporter<'results'> {
     }
     const existingIds = this.staged.map((s) => s.id);
     if (existingIds.length) {
-      const rows: { k: string }[] = await this.db.query('SELECT dedupe_key AS k FROM show_result WHERE show_id IN (?)', [existingIds]);
+      const rows: { k: string }[] = await this.db.query('SELECT LOWER(HEX(dedupe_key)) AS k FROM show_result WHERE show_id IN (?)', [existingIds]);
       for (const r of rows) this.existingKeys.add(r.k);
     }
     this.out = createWriteStream(this.tsvPath, { highWaterMark: 1 << 20 });
@@ -128,8 +128,8 @@ export class ResultsImporter implements KindImporter<'results'> {
     const sql = `LOAD DATA LOCAL INFILE 'staged-results.tsv' IGNORE INTO TABLE show_result
       CHARACTER SET utf8mb4 FIELDS TERMINATED BY '\\t' ESCAPED BY '\\\\' LINES TERMINATED BY '\\n'
       (@show_index, animal_id, ear_id, exhibitor, breed, variety, sex, age_class, entries_in_class,
-       exhibitors_in_class, placing, awards, judge, dedupe_key)
-      SET show_id = ELT(@show_index, ${ids.join(',')}), import_job_id = ${Number(this.ctx.jobId)}`;
+       exhibitors_in_class, placing, awards, judge, @dedupe_hex)
+      SET dedupe_key = UNHEX(@dedupe_hex), show_id = ELT(@show_index, ${ids.join(',')}), import_job_id = ${Number(this.ctx.jobId)}`;
     const conn = await tx.queryRunner!.connect();
     const result = await new Promise<{ affectedRows: number }>((resolve, reject) => {
       conn.query({ sql, infileStreamFactory: () => createReadStream(this.tsvPath, { highWaterMark: 1 << 20 }) },

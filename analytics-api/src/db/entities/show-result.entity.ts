@@ -2,7 +2,7 @@ import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /** One placing of one animal in one class at one show. */
 @Entity('show_result')
-@Index(['showId', 'dedupeKey'], { unique: true })
+@Index('UQ_show_result_show_dedupe', ['showId', 'dedupeKey'], { unique: true })
 export class ShowResult {
   @PrimaryGeneratedColumn({ type: 'int' }) id: number;
   @Column({ type: 'int', name: 'show_id' }) showId: number;
@@ -20,6 +20,7 @@ export class ShowResult {
   /** Space-separated award codes (BOV BOSV BOB BOSB BIS). */
   @Column({ type: 'varchar', length: 40, default: '' }) awards: string;
   @Column({ type: 'varchar', length: 120, nullable: true }) judge: string | null;
-  @Column({ type: 'char', length: 40, name: 'dedupe_key' }) dedupeKey: string;
+  /** SHA-1 of the record's dedupe key (shared/imports/dedupe-key.ts), 20 raw bytes. */
+  @Column({ type: 'binary', length: 20, name: 'dedupe_key' }) dedupeKey: Buffer;
   @Column({ type: 'int', name: 'import_job_id', nullable: true }) importJobId: number | null;
 }
