@@ -96,7 +96,7 @@ async function writeResults(path: string, rows: number) {
     const date = `2026-${String(1 + (show % 11)).padStart(2, '0')}-${String(1 + (show % 27)).padStart(2, '0')}`;
     for (let p = 1; p <= entries && written < rows; p++, written++) {
       const line = `Bench Show ${show},${date},Judge ${show % 17},B${classNo}-${p},Exhibitor ${Math.floor(rnd() * 400)},${breed},${variety},${sex},${age},${entries},${exhibitors},${p},${p === 1 ? 'BOV' : ''}\n`;
-      if (!out.write(line)) await new Promise((r) => out.once('drain', r));
+      if (!out.write(line)) await new Promise<void>((r) => out.once('drain', () => r()));
     }
     classNo++;
   }

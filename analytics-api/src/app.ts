@@ -20,6 +20,25 @@ import { ImportsService } from './imports/imports.service';
 import { errorHandler, notFoundHandler } from './http/error-handlers';
 import { registerRabbitryRoutes } from './rabbitries/rabbitries.router';
 import { RabbitriesService } from './rabbitries/rabbitries.service';
+import { registerAnimalRoutes } from './animals/animals.router';
+import { AnimalsService } from './animals/animals.service';
+import { registerBreedRoutes } from './breeds/breeds.router';
+import { BreedsService } from './breeds/breeds.service';
+import { registerEvaluationRoutes } from './evaluations/evaluations.router';
+import { EvaluationsService } from './evaluations/evaluations.service';
+import { registerLitterRoutes } from './litters/litters.router';
+import { LittersService } from './litters/litters.service';
+import { registerNoteRoutes } from './notes/notes.router';
+import { NotesService } from './notes/notes.service';
+import { registerPedigreeRoutes } from './pedigree/pedigree.router';
+import { PedigreeService } from './pedigree/pedigree.service';
+import { PhotoStore } from './photos/photo-store';
+import { registerPhotoRoutes } from './photos/photos.router';
+import { PhotosService } from './photos/photos.service';
+import { registerShowRoutes } from './shows/shows.router';
+import { ShowsService } from './shows/shows.service';
+import { registerWeightRoutes } from './weights/weights.router';
+import { WeightsService } from './weights/weights.service';
 
 export interface AppContext {
   app: Express;
@@ -89,6 +108,16 @@ export function createApp(config: Config, db: DataSource): AppContext {
     csrf: { generate: (req, overwrite) => csrf.generateToken(req, overwrite) },
   });
   registerRabbitryRoutes(api, new RabbitriesService(db));
+  const photos = new PhotoStore(config.DATA_DIR);
+  registerBreedRoutes(api, new BreedsService(db));
+  registerAnimalRoutes(api, new AnimalsService(db, photos));
+  registerPedigreeRoutes(api, new PedigreeService(db));
+  registerPhotoRoutes(api, new PhotosService(db, photos));
+  registerWeightRoutes(api, new WeightsService(db));
+  registerEvaluationRoutes(api, new EvaluationsService(db));
+  registerLitterRoutes(api, new LittersService(db));
+  registerNoteRoutes(api, new NotesService(db));
+  registerShowRoutes(api, new ShowsService(db));
   registerClubRoutes(api, new ClubsService(db));
   registerImportRoutes(api, new ImportsService(db, config.DATA_DIR), { dataDir: config.DATA_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB });
   app.use('/api', api.router);

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Environment, parsed and validated once at start; a bad value stops the process with its name. */
 const Env = z.object({

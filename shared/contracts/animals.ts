@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { parseIsoDate } from '../domain/calendar-date';
 import { ageClassSchema, animalStatusSchema, sexSchema } from '../domain/terms';
 import { awardSchema } from '../domain/awards';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { breedSchema } from '../domain/breed';
 
 /**
@@ -10,9 +10,9 @@ export function breedKeyOf(name: string): string {
     .replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'breed';
 }
 
-/** The catalogue's own schema; the key may be left out and then follows from the name. */
+/** The catalogue's own schema; the key always follows from the name (the catalogue stores names). */
 export const CreateBreedRequest = z.preprocess(
-  (v) => (v && typeof v === 'object' && !('key' in v) && typeof (v as { name?: unknown }).name === 'string'
+  (v) => (v && typeof v === 'object' && typeof (v as { name?: unknown }).name === 'string'
     ? { ...v, key: breedKeyOf((v as { name: string }).name) } : v),
   breedSchema,
 );

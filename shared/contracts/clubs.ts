@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { CLUB_ROLES } from './roles';
 
 export const Club = z.object({

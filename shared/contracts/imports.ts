@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { IMPORT_KIND_KEYS } from '../imports/import-kinds';
 
 export const ImportKind = z.enum(IMPORT_KIND_KEYS);

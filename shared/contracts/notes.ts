@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 export const CreateNoteRequest = z.object({
   body: z.string().trim().min(1, 'Write the note').max(5000, 'A note has at most 5000 characters'),

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { RABBITRY_ROLES } from './roles';
 
 export const Rabbitry = z.object({

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { awardSchema } from '../domain/awards';
 import { ageClassSchema, sexSchema } from '../domain/terms';
 import { IsoDate } from './animals';

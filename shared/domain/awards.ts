@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Show awards above class placings, by the trade's abbreviations. */
 export const AWARDS = ['BOV', 'BOSV', 'BOB', 'BOSB', 'BIS'] as const;

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { type AgeClass, ageClassesOf, CLASS_SCHEMES, type ClassScheme, type Sex } from './terms';
 
 /**

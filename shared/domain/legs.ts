@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { type Award, AWARD_COMPETITION, AWARD_LABELS, AWARDS } from './awards';
 import type { CompetitionSize, CompetitionSizes } from './competition-sizes';
 import type { AgeClass, Sex } from './terms';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Trade terms used across records, screens and imports, with the words screens show. */
 export const SEXES = ['buck', 'doe'] as const;

@@ -5,6 +5,7 @@ import { loadDemo } from '../../analytics-api/src/demo/load-demo';
 import { resetDatabase, signIn, startTestApp, type TestApp } from '../support/test-app';
 import { foundation } from './matrix/foundation-rows';
 import { imports } from './matrix/imports-rows';
+import { records } from './matrix/records-rows';
 import { ACTORS, ALL_NAMES, EMAIL, VISIBLE, type Actor, type Ids, type MatrixFeature, type Row } from './matrix/matrix-types';
 
 /**
@@ -13,7 +14,7 @@ import { ACTORS, ALL_NAMES, EMAIL, VISIBLE, type Actor, type Ids, type MatrixFea
  * (the first test fails otherwise), so each new route joins the matrix.
  */
 // One file per feature; a new feature adds its file here.
-const FEATURES: MatrixFeature[] = [foundation, imports];
+const FEATURES: MatrixFeature[] = [foundation, imports, records];
 const MATRIX: Record<string, Row> = Object.assign({}, ...FEATURES.map((f) => f.rows));
 
 let t: TestApp;

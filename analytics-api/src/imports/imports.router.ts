@@ -2,7 +2,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import multer from 'multer';
-import { z } from 'zod';
+import * as z from 'zod';
 import { CommitOptions, ImportCheckOptions, ImportKind } from '@shared/contracts/imports';
 import { ANY_RABBITRY_ROLE, club, RABBITRY_EDITORS, type AccessRule } from '../access/access-rules';
 import type { RouteRegistrar } from '../access/route-registrar';

@@ -1,0 +1,20 @@
+import type { Animal as AnimalDto, AnimalSummary } from '@shared/contracts/animals';
+import type { Animal } from '../db/entities/animal.entity';
+
+export function toSummary(a: Animal): AnimalSummary {
+  return { id: a.id, earId: a.earId, name: a.name, sex: a.sex, variety: a.variety, birthDate: a.birthDate, status: a.status, isStub: a.isStub };
+}
+
+export function toAnimalDto(a: Animal, breedName: string | null): AnimalDto {
+  return {
+    ...toSummary(a), rabbitryId: a.rabbitryId, breedId: a.breedId, breed: breedName, sireId: a.sireId, damId: a.damId,
+    litterId: a.litterId, line: a.line, registrationNo: a.registrationNo, grandChampion: a.grandChampion, breeder: a.breeder,
+    stubWeightGrams: a.stubWeightGrams, hasPhoto: a.photoPath !== null, notes: a.notes, keeperDecision: a.keeperDecision,
+  };
+}
+
+/** MariaDB's duplicate-key error, as TypeORM passes it on. */
+export function isDuplicateKey(e: unknown): boolean {
+  const err = e as { code?: string; driverError?: { code?: string } };
+  return err?.code === 'ER_DUP_ENTRY' || err?.driverError?.code === 'ER_DUP_ENTRY';
+}
