@@ -23,7 +23,8 @@ interface Scenario {
   }[];
 }
 
-export const DEMO_DIR = resolve(import.meta.dirname, '../../../sample-data/demo');
+/** The demo files, relative to the project root (the start and test commands run there; the API is bundled elsewhere). */
+export const DEMO_DIR = resolve(process.env.KEEPERLINE_DEMO_DIR ?? 'sample-data/demo');
 const KIND_ORDER: ImportKindKey[] = ['animals', 'litters', 'weights', 'evaluations'];
 
 /**
