@@ -34,8 +34,12 @@ const env = {
   DATA_DIR: dataDir,
 };
 const children = [];
+let stopping = false;
 
+/** Stops the app (and its watchers) first, then the private database; once, whoever asks. */
 async function shutdown(code) {
+  if (stopping) return;
+  stopping = true;
   for (const c of children) c.kill('SIGTERM');
   await Promise.all(children.map((c) => new Promise((r) => (c.exitCode !== null ? r() : c.on('exit', r)))));
   if (database) {
@@ -66,7 +70,7 @@ try {
 
 const spawnChild = (cmd, args) => {
   const child = spawn(cmd, args, { cwd: root, env, stdio: 'inherit' });
-  child.on('exit', (code) => { if (!children.stopping) { children.stopping = true; shutdown(code ?? 0); } });
+  child.on('exit', (code) => shutdown(code ?? 0));
   children.push(child);
 };
 
