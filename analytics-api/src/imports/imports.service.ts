@@ -12,6 +12,7 @@ import { User } from '../db/entities/user.entity';
 import { AppError, notFound } from '../http/app-error';
 import { csvRows, mapper, sniffCsv } from './csv-file';
 import { dedupeHash } from './dedupe-hash';
+import { HashRowSet } from './hash-row-set';
 import { createHerdImporter } from './herd-importers';
 import type { CheckReport, ImporterContext, KindImporter } from './kind-importer';
 import { ResultsImporter } from './results-importer';
@@ -165,7 +166,7 @@ export class ImportsService {
         (severity === 'error' ? rowsWithError : rowsWithWarning).add(row);
       },
     };
-    const seen = new Map<string, number>();
+    const seen = new HashRowSet();
     const map = mapper(job.headers!, job.options!.mapping);
     let total = 0;
     let duplicatesInFile = 0;
@@ -177,13 +178,12 @@ export class ImportsService {
         for (const w of v.warnings) report.problem(row, w.field, w.message, 'warning');
         if (!v.value) continue;
         const hash = dedupeHash(dedupeKey(job.kind as ImportKindKey, v.value));
-        const first = seen.get(hash);
+        const first = seen.add(hash, row);
         if (first !== undefined) {
           duplicatesInFile++;
           report.problem(row, '', `the same record as row ${first}: counted once`, 'warning');
           continue;
         }
-        seen.set(hash, row);
         importer.accept(v.value, row, hash, report);
       }
       total += chunk.rows.length;

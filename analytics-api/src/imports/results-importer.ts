@@ -7,6 +7,7 @@ import { validateRow } from '@shared/imports/validate-row';
 import { ClubMembership } from '../db/entities/club-membership.entity';
 import { Show } from '../db/entities/show.entity';
 import type { CheckReport, ImporterContext, KindImporter } from './kind-importer';
+import { HashRowSet } from './hash-row-set';
 import { tsvField } from './tsv';
 
 type Result = ImportRecords['results'];
@@ -23,7 +24,7 @@ const norm = (s: string) => s.trim().replace(/\s+/g, ' ').toLowerCase();
 export class ResultsImporter implements KindImporter<'results'> {
   private shows = new Map<string, number>();
   private staged: StagedShow[] = [];
-  private existingKeys = new Set<string>();
+  private existingKeys = new HashRowSet();
   private memberHerds = new Map<string, number>();
   private animalsByHerd = new Map<number, Map<string, number>>();
   private out: WriteStream | null = null;
