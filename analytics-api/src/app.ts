@@ -9,6 +9,8 @@ import { join, resolve } from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config';
 import { RouteRegistrar } from './access/route-registrar';
+import { registerAnalyticsRoutes } from './analytics/analytics.router';
+import { AnalyticsService } from './analytics/analytics.service';
 import { configurePassport } from './auth/passport-setup';
 import { registerSessionRoutes } from './auth/session.router';
 import { SessionService } from './auth/session.service';
@@ -120,6 +122,7 @@ export function createApp(config: Config, db: DataSource): AppContext {
   registerShowRoutes(api, new ShowsService(db));
   registerClubRoutes(api, new ClubsService(db));
   registerImportRoutes(api, new ImportsService(db, config.DATA_DIR), { dataDir: config.DATA_DIR, uploadLimitMb: config.UPLOAD_LIMIT_MB });
+  registerAnalyticsRoutes(api, new AnalyticsService(db));
   app.use('/api', api.router);
   app.use('/api', notFoundHandler);
 

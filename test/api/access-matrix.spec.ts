@@ -6,6 +6,7 @@ import { resetDatabase, signIn, startTestApp, type TestApp } from '../support/te
 import { foundation } from './matrix/foundation-rows';
 import { imports } from './matrix/imports-rows';
 import { records } from './matrix/records-rows';
+import { analytics } from './matrix/analytics-rows';
 import { ACTORS, ALL_NAMES, EMAIL, VISIBLE, type Actor, type Ids, type MatrixFeature, type Row } from './matrix/matrix-types';
 
 /**
@@ -14,7 +15,7 @@ import { ACTORS, ALL_NAMES, EMAIL, VISIBLE, type Actor, type Ids, type MatrixFea
  * (the first test fails otherwise), so each new route joins the matrix.
  */
 // One file per feature; a new feature adds its file here.
-const FEATURES: MatrixFeature[] = [foundation, imports, records];
+const FEATURES: MatrixFeature[] = [foundation, imports, records, analytics];
 const MATRIX: Record<string, Row> = Object.assign({}, ...FEATURES.map((f) => f.rows));
 
 let t: TestApp;
