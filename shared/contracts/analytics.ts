@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { AWARDS } from '../domain/awards';
 import { animalStatusSchema, sexSchema } from '../domain/terms';
 import { IsoDate, KeeperDecision } from './animals';
