@@ -4,6 +4,7 @@
 // end-to-end tests on Debian's Chromium. Stops the database even when a suite fails and ends
 // with one line "N passed, N failed" over every suite.
 //   --only api|web|build|e2e   run one suite (the database is started only when needed)
+//   -- <file filters>           passed on to Vitest (api, e2e), e.g. `--only e2e -- records`
 import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
@@ -13,6 +14,8 @@ import { ensureDependencies, npx, root, run } from './workspace.mjs';
 const onlyIdx = process.argv.indexOf('--only');
 const only = onlyIdx > 0 ? process.argv[onlyIdx + 1] : null;
 const wants = (suite) => !only || only === suite;
+const dashDash = process.argv.indexOf('--');
+const filters = dashDash > 0 ? process.argv.slice(dashDash + 1) : [];
 
 ensureDependencies();
 if (wants('e2e') && !existsSync('/usr/bin/chromium')) {
@@ -43,10 +46,10 @@ async function main() {
     run(npx('tsx'), ['--tsconfig', 'analytics-api/tsconfig.json', 'analytics-api/src/db/migrate.ts'], { env });
     run(npx('tsx'), ['--tsconfig', 'analytics-api/tsconfig.json', 'analytics-api/src/db/migrate.ts'], { env: { ...env, DATABASE_URL: env.E2E_DATABASE_URL } });
   }
-  if (wants('api')) await suite('api (unit + integration)', npx('vitest'), ['run', '--config', 'vitest.config.ts'], env);
+  if (wants('api')) await suite('api (unit + integration)', npx('vitest'), ['run', '--config', 'vitest.config.ts', ...filters], env);
   if (wants('web')) await suite('dashboard components', npx('ng'), ['test', 'dashboard', '--watch=false'], env);
   if (wants('build') || wants('e2e')) await suite('production build', npx('ng'), ['build', 'dashboard'], env, { countAs: 1 });
-  if (wants('e2e')) await suite('browser end-to-end', npx('vitest'), ['run', '--config', 'vitest.e2e.config.ts'], env);
+  if (wants('e2e')) await suite('browser end-to-end', npx('vitest'), ['run', '--config', 'vitest.e2e.config.ts', ...filters], env);
 }
 
 /** Runs one suite, echoing its output, and adds its counts (Vitest's "Tests" line) to the totals. */

@@ -1,6 +1,7 @@
 import { Routes } from '@angular/router';
 import { authGuard, signedOutGuard } from './session/auth-guard';
 import { clubMemberGuard, rabbitryMemberGuard } from './session/role-guard';
+import { CLUB_RECORD_ROUTES, RABBITRY_RECORD_ROUTES, SITE_RECORD_ROUTES } from './records/records-routes';
 
 export const routes: Routes = [
   {
@@ -25,6 +26,7 @@ export const routes: Routes = [
         title: 'Preferences',
         loadComponent: () => import('./preferences/preferences').then((m) => m.Preferences),
       },
+      ...SITE_RECORD_ROUTES,
       {
         path: 'r/:rabbitryId',
         canActivate: [rabbitryMemberGuard],
@@ -38,6 +40,37 @@ export const routes: Routes = [
             path: 'access',
             title: 'Access',
             loadComponent: () => import('./rabbitry/rabbitry-access').then((m) => m.RabbitryAccess),
+          },
+          ...RABBITRY_RECORD_ROUTES,
+          {
+            path: 'keepers',
+            title: 'Keeper board',
+            loadComponent: () => import('./keepers/keeper-board').then((m) => m.KeeperBoard),
+          },
+          {
+            path: 'sires-dams',
+            title: 'Sires & dams',
+            loadComponent: () => import('./sire-dam/sire-dam-report').then((m) => m.SireDamReport),
+          },
+          {
+            path: 'traits',
+            title: 'Trait inheritance',
+            loadComponent: () => import('./traits/trait-inheritance').then((m) => m.TraitInheritance),
+          },
+          {
+            path: 'growth',
+            title: 'Growth curves',
+            loadComponent: () => import('./growth/growth-curves').then((m) => m.GrowthCurves),
+          },
+          {
+            path: 'pairing',
+            title: 'Pairing planner',
+            loadComponent: () => import('./pairing/pairing-planner').then((m) => m.PairingPlanner),
+          },
+          {
+            path: 'lines',
+            title: 'Line comparison',
+            loadComponent: () => import('./lines/line-comparison').then((m) => m.LineComparison),
           },
         ],
       },
@@ -55,6 +88,12 @@ export const routes: Routes = [
             title: 'Club members',
             loadComponent: () => import('./club/club-members').then((m) => m.ClubMembers),
           },
+          {
+            path: 'season',
+            title: 'Season',
+            loadComponent: () => import('./season/club-season').then((m) => m.ClubSeason),
+          },
+          ...CLUB_RECORD_ROUTES,
         ],
       },
       // Inside the frame, so a signed-in breeder keeps the navigation; guards also land here.

@@ -16,23 +16,51 @@ describe('navigationFor with the real table', () => {
     ]);
   });
 
-  it.each(['owner', 'partner', 'mentor'] as const)('gives a rabbitry %s its overview and the access list', (role) => {
+  it.each(['owner', 'partner', 'mentor'] as const)('gives a rabbitry %s its overview, records and the access list', (role) => {
     const sections = navigationFor(user, inRabbitry(role));
     expect(sections[1]).toMatchObject({ title: 'Brackenrow', role });
-    expect(links(sections)).toEqual(['Home /', 'Overview /r/7', 'Access /r/7/access']);
+    const all = links(sections);
+    // Other screens sit between these; the overview comes first and the access list last.
+    expect(all.slice(0, 2)).toEqual(['Home /', 'Overview /r/7']);
+    expect(all.at(-1)).toBe('Access /r/7/access');
+    expect(all).toEqual(expect.arrayContaining(['Herd /r/7/herd', 'Litters /r/7/litters', 'Imports /r/7/imports']));
   });
 
-  it.each(['officer', 'member'] as const)('gives a club %s its overview and members', (role) => {
-    expect(links(navigationFor(user, inClub(role)))).toEqual(['Home /', 'Overview /c/3', 'Members /c/3/members']);
+  it('gives a club officer its overview, members, shows and imports', () => {
+    const all = links(navigationFor(user, inClub('officer')));
+    expect(all.slice(0, 3)).toEqual(['Home /', 'Overview /c/3', 'Members /c/3/members']);
+    expect(all).toEqual(expect.arrayContaining(['Shows & results /c/3/shows', 'Imports /c/3/imports']));
+  });
+
+  it('gives a club member the shows but not the imports, which only officers make', () => {
+    const all = links(navigationFor(user, inClub('member')));
+    expect(all.slice(0, 3)).toEqual(['Home /', 'Overview /c/3', 'Members /c/3/members']);
+    expect(all).toContain('Shows & results /c/3/shows');
+    expect(all).not.toContain('Imports /c/3/imports');
+  });
+
+  it.each(['owner', 'partner', 'mentor'] as const)('gives a rabbitry %s the pairing planner and the line comparison', (role) => {
+    expect(links(navigationFor(user, inRabbitry(role)))).toEqual(expect.arrayContaining(['Pairing planner /r/7/pairing', 'Line comparison /r/7/lines']));
+  });
+
+  it.each(['owner', 'partner', 'mentor'] as const)('gives a rabbitry %s the four breeder panels', (role) => {
+    expect(links(navigationFor(user, inRabbitry(role)))).toEqual(expect.arrayContaining([
+      'Keeper board /r/7/keepers', 'Sires & dams /r/7/sires-dams', 'Trait inheritance /r/7/traits', 'Growth curves /r/7/growth',
+    ]));
+  });
+
+  it.each(['officer', 'member'] as const)('gives a club %s the season', (role) => {
+    expect(links(navigationFor(user, inClub(role)))).toContain('Season /c/3/season');
   });
 
   it('marks overviews as exact so they do not light up on their sub-pages', () => {
     const [, rabbitry] = navigationFor(user, inRabbitry('owner'));
-    expect(rabbitry.items.map((i) => i.exact)).toEqual([true, false]);
+    expect(rabbitry.items.map((i) => i.exact)).toEqual(rabbitry.items.map((_, i) => i === 0));
   });
 
-  it('gives an admin no screens that do not exist yet', () => {
-    expect(links(navigationFor(userWith({ isAdmin: true }), { kind: 'everything' }))).toEqual(['Home /']);
+  it('gives an admin the breed catalogue and no one else', () => {
+    expect(links(navigationFor(userWith({ isAdmin: true }), { kind: 'everything' }))).toEqual(expect.arrayContaining(['Home /', 'Breed catalogue /admin/breeds']));
+    expect(links(navigationFor(userWith(), { kind: 'everything' }))).toEqual(['Home /']);
   });
 
   it('declares, for every entry, only roles that belong to its scope', () => {

@@ -33,11 +33,26 @@ export interface NavSection {
 /** Later features add their screens here, with the roles that may open them. */
 export const NAVIGATION: readonly NavEntry[] = [
   { scope: 'site', label: 'Home', path: '', roles: ['signed-in'] },
+  { scope: 'site', label: 'Breed catalogue', path: 'admin/breeds', roles: ['admin'] },
   { scope: 'rabbitry', label: 'Overview', path: '', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Herd', path: 'herd', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Litters', path: 'litters', roles: ['owner', 'partner', 'mentor'] },
+  // Mentors read the import history (the API allows it); the screen offers the wizard to editors only.
+  { scope: 'rabbitry', label: 'Imports', path: 'imports', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Keeper board', path: 'keepers', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Sires & dams', path: 'sires-dams', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Trait inheritance', path: 'traits', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Growth curves', path: 'growth', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Pairing planner', path: 'pairing', roles: ['owner', 'partner', 'mentor'] },
+  { scope: 'rabbitry', label: 'Line comparison', path: 'lines', roles: ['owner', 'partner', 'mentor'] },
   // Everyone with a role sees who else has access; only the owner changes it (the screen and the API enforce that).
   { scope: 'rabbitry', label: 'Access', path: 'access', roles: ['owner', 'partner', 'mentor'] },
   { scope: 'club', label: 'Overview', path: '', roles: ['officer', 'member'] },
   { scope: 'club', label: 'Members', path: 'members', roles: ['officer', 'member'] },
+  { scope: 'club', label: 'Shows & results', path: 'shows', roles: ['officer', 'member'] },
+  // Members read the season; only officers see its points formula editor (the screen and the API enforce that).
+  { scope: 'club', label: 'Season', path: 'season', roles: ['officer', 'member'] },
+  { scope: 'club', label: 'Imports', path: 'imports', roles: ['officer'] },
 ];
 
 /**

@@ -1,0 +1,42 @@
+import { betterKind, cleanMapping, fieldLabel, mappingFields, mappingProblems, unusedHeaders } from './column-mapping';
+
+describe('column mapping', () => {
+  it('marks required fields and the weight pair of which one is needed', () => {
+    const fields = mappingFields('weights');
+    expect(fields.map((f) => [f.key, f.required, f.group])).toEqual([
+      ['ear_id', true, null],
+      ['weighed_on', true, null],
+      ['weight', true, 'Weight (with unit) or Weight in grams'],
+      ['weight_g', true, 'Weight (with unit) or Weight in grams'],
+      ['notes', false, null],
+    ]);
+  });
+
+  it('drops fields left out of the file', () => {
+    expect(cleanMapping({ ear_id: 'Tattoo', notes: '', weight: null })).toEqual({ ear_id: 'Tattoo' });
+  });
+
+  it('says what still stops the check', () => {
+    expect(mappingProblems('weights', { ear_id: 'Tattoo' })).toEqual([
+      'Choose the column for Weighed on',
+      'Choose a column for Weight (with unit) or Weight in grams',
+    ]);
+    expect(mappingProblems('weights', { ear_id: 'Tattoo', weighed_on: 'Date', weight_g: 'Date' })).toEqual([
+      'Column “Date” is chosen for Weighed on and Weight in grams',
+    ]);
+    expect(mappingProblems('weights', { ear_id: 'Tattoo', weighed_on: 'Date', weight: 'Wt' })).toEqual([]);
+  });
+
+  it('lists the columns nothing imports and names fields for the problems table', () => {
+    expect(unusedHeaders(['Tattoo', 'Date', 'Pen', ''], { ear_id: 'Tattoo', weighed_on: 'Date' })).toEqual(['Pen']);
+    expect(fieldLabel('results', 'age_class')).toBe('Age class');
+    expect(fieldLabel('results', '')).toBe('whole row');
+  });
+
+  it('notices a file of another kind than the one chosen', () => {
+    const herdKinds = ['animals', 'weights', 'litters', 'evaluations'] as const;
+    expect(betterKind(['ear_id', 'weighed_on', 'weight'], 'animals', herdKinds)).toBe('weights');
+    expect(betterKind(['Tattoo', 'Sex', 'Breed', 'Born'], 'animals', herdKinds)).toBeNull();
+    expect(betterKind(['Pen', 'Feed'], 'animals', herdKinds)).toBeNull();
+  });
+});
