@@ -91,7 +91,11 @@ export const PlacementQuery = z.object({
 export type PlacementQuery = z.infer<typeof PlacementQuery>;
 
 export const PlacementIndexValue = z.object({
-  /** observed / expected top-k placings: 1 = as chance, 2 = twice as often */
+  /**
+   * observed / expected top-k placings over the results in classes of more than k entries
+   * (smaller classes place everyone): 1 = as chance, 2 = twice as often; held at the largest
+   * value chance allows (1/max k/n), as is the interval.
+   */
   index: z.number(), lower: z.number(), upper: z.number(), observed: int, expected: z.number(),
 });
 

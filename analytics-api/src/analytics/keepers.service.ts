@@ -31,11 +31,11 @@ function evaluationPercent(data: HerdData, a: AnimalRow): number | null {
   return possible > 0 ? (100 * got) / possible : null;
 }
 
-/** Placement index (top 3) of a parent's offspring results, or null without results. */
+/** Placement index (top 3) of a parent's offspring results, or null without results in classes of more than 3. */
 function offspringPlacementIndex(data: HerdData, parentId: number | null): number | null {
   if (parentId === null) return null;
   const results = (data.offspring.get(parentId) ?? []).flatMap((o) => data.resultsOf.get(o) ?? []).filter((r) => r.placing >= 1 && r.placing <= r.entries);
-  return results.length === 0 ? null : placementIndex(results, 3).index;
+  return results.length === 0 ? null : (placementIndex(results, 3)?.index ?? null);
 }
 
 /**

@@ -69,7 +69,8 @@ export function parentPlacements<P>(groups: readonly ParentGroup<P>[], k: number
     const offspringShown = new Set(results.map((r) => r.animalId)).size;
     const own: string[] = [];
     if (results.length < 20) own.push(`Only ${results.length} result${results.length === 1 ? '' : 's'} from ${offspringShown} offspring: treat the rate as a rough guide (want 20 or more).`);
-    if (pi.expected >= results.length) own.push(`Every class had ${k} or fewer entries: placings say nothing about merit here.`);
+    if (pi === null) own.push(`Every class had ${k} or fewer entries: placings say nothing about merit here.`);
+    else if (pi.certain > 0) own.push(`${pi.certain} result${pi.certain === 1 ? '' : 's'} in classes of ${k} or fewer entries, where every animal places, ${pi.certain === 1 ? 'is' : 'are'} left out of the placement index.`);
     return {
       parent: g.parent,
       rank: ranks[i]!,
@@ -77,7 +78,7 @@ export function parentPlacements<P>(groups: readonly ParentGroup<P>[], k: number
       offspringShown,
       topK: proportion(counts[i]!.successes, counts[i]!.trials),
       meanPlacementScore: meanWithSe(scores),
-      placementIndex: { index: pi.index, lower: pi.lower, upper: pi.upper, observed: pi.observed, expected: pi.expected },
+      placementIndex: pi && { index: pi.index, lower: pi.lower, upper: pi.upper, observed: pi.observed, expected: pi.expected },
       shrunkenShare: shrunk[i]!.shrunken,
       shrinkage: shrunk[i]!.shrinkage,
       warnings: own,

@@ -10,9 +10,8 @@ export function shareText(p: { share: number; lower: number; upper: number }): s
 }
 
 /**
- * "1.26 (1.12–1.40)", or a dash without results in classes of more than one. An interval that
- * does not hold its own estimate (the API's score interval collapses when every result placed)
- * is not shown as if it were one.
+ * "1.26 (1.12–1.40)", or a dash without results in classes of more than k. An interval that
+ * does not hold its own estimate (a fault upstream) is not shown as if it were one.
  */
 export function indexText(p: ParentPlacement): string {
   const i = p.placementIndex;
