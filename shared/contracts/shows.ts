@@ -39,6 +39,23 @@ export const Show = z.object({
 });
 export type Show = z.infer<typeof Show>;
 
+/** One show with what its results hold: classes judged, exhibitors, and who judged how many. */
+export const ShowDetail = Show.extend({
+  counts: z.object({
+    /** Classes judged: breed × variety × sex × age class. */
+    classes: z.number().int(),
+    breeds: z.number().int(),
+    exhibitors: z.number().int(),
+    /** Results matched to an animal of a member's herd. */
+    matched: z.number().int(),
+    /** Results whose age class differs from the one the birth date gives. */
+    ageClassMismatches: z.number().int(),
+  }),
+  /** Judges named on the results (else the show's), with the classes and results each judged. */
+  judging: z.array(z.object({ judge: z.string().nullable(), classes: z.number().int(), results: z.number().int() })),
+});
+export type ShowDetail = z.infer<typeof ShowDetail>;
+
 export const ShowResult = z.object({
   id: z.number().int(),
   showId: z.number().int(),

@@ -428,6 +428,7 @@ describe('club shows and results', () => {
     expect((await outsider.agent.get(`/api/clubs/${c1}/shows`)).status).toBe(404);
     expect((await outsider.agent.get(`/api/clubs/${c1}/results`)).status).toBe(404);
     expect((await outsider.agent.get(`/api/clubs/${c1}/shows/${fx.showId}/results`)).status).toBe(404);
+    expect((await outsider.agent.get(`/api/clubs/${c1}/shows/${fx.showId}`)).status).toBe(404);
     // Its own club has no shows: nothing of c1 leaks into its list.
     expect((await outsider.agent.get(`/api/clubs/${c2}/shows`).expect(200)).body.shows).toEqual([]);
     // Nor can a show of c1 be read through c2.
@@ -447,6 +448,14 @@ describe('club shows and results', () => {
     expect(results[0]).toMatchObject({ ageClass: 'junior', computedAgeClass: 'senior', ageClassMismatch: true, matched: true });
     const spring = (await member.agent.get(`/api/clubs/${c1}/shows/${fx.showId}/results`).expect(200)).body.results;
     expect(spring[0]).toMatchObject({ ageClass: 'senior', computedAgeClass: 'senior', ageClassMismatch: false, awards: ['BOV'] });
+    const one = (await member.agent.get(`/api/clubs/${c1}/shows/${fx.emptyShowId}`).expect(200)).body;
+    expect(one).toMatchObject({
+      name: 'Fixture Empty Show', judges: [], results: 1,
+      counts: { classes: 1, breeds: 1, exhibitors: 1, matched: 1, ageClassMismatches: 1 },
+      judging: [{ judge: null, classes: 1, results: 1 }],
+    });
+    expect((await member.agent.get(`/api/clubs/${c1}/shows/${fx.showId}`).expect(200)).body.judging).toEqual([{ judge: 'Judge Quill', classes: 1, results: 1 }]);
+    expect((await member.agent.get(`/api/clubs/${c1}/shows/999999`)).status).toBe(404);
 
     const season = (await member.agent.get(`/api/clubs/${c1}/results?exhibitor=Marla%20Fenwick`).expect(200)).body;
     expect(season).toMatchObject({ total: 2, from: '2026-01-01', to: '2026-12-31' });

@@ -17,6 +17,9 @@ export function registerShowRoutes(r: RouteRegistrar, service: ShowsService): vo
   r.add('post', base, OFFICER, async (req, res) => {
     res.status(201).json(await service.create(res.locals.access.clubId!, validate(CreateShowRequest, req.body)));
   });
+  r.add('get', `${base}/:showId`, ANY_CLUB_ROLE, async (req, res) => {
+    res.json(await service.one(res.locals.access.clubId!, showId(req)));
+  });
   r.add('patch', `${base}/:showId`, OFFICER, async (req, res) => {
     res.json(await service.update(res.locals.access.clubId!, showId(req), validate(UpdateShowRequest, req.body)));
   });

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import type { Show as ShowDto, ShowResult as ShowResultDto } from '@shared/contracts/shows';
+import type { ShowDetail, Show as ShowDto, ShowResult as ShowResultDto } from '@shared/contracts/shows';
 import { toCsv } from '@shared/csv/to-csv';
 import { Club } from '../db/entities/club.entity';
 import { Show } from '../db/entities/show.entity';
@@ -8,6 +8,7 @@ import { AppError, notFound } from '../http/app-error';
 import { isDuplicateKey } from '../animals/animal-dto';
 import { computedAgeClass } from './computed-age-class';
 import { parseAwards } from './parse-awards';
+import { showCounts } from './show-counts';
 
 interface ShowInput { name?: string; showDate?: string; location?: string | null; hostClub?: string | null; judges?: string[]; sanctionNo?: string | null }
 interface SeasonFilter { exhibitor?: string; breed?: string; from?: string; to?: string; page: number; pageSize: number }
@@ -104,6 +105,12 @@ export class ShowsService {
       await tx.getRepository(ShowResult).delete({ showId });
       await tx.getRepository(Show).delete({ id: showId });
     });
+  }
+
+  /** One show with its counts and judges, from its results. */
+  async one(clubId: number, showId: number): Promise<ShowDetail> {
+    const show = await this.read(clubId, showId);
+    return { ...show, ...showCounts(await this.results(clubId, showId), show.judges) };
   }
 
   async results(clubId: number, showId: number): Promise<ShowResultDto[]> {

@@ -75,6 +75,7 @@ export const recordsRows: Record<string, Row> = {
 
   'get /clubs/:clubId/shows': { allowed: CLUB_READERS, path: shows },
   'post /clubs/:clubId/shows': { allowed: CLUB_OFFICERS, path: shows, body: () => ({ name: 'Matrix Summer Show', showDate: '2026-06-20' }), mutates: true },
+  'get /clubs/:clubId/shows/:showId': { allowed: CLUB_READERS, path: (i) => `${shows(i)}/${i.fixture.showId}` },
   'patch /clubs/:clubId/shows/:showId': { allowed: CLUB_OFFICERS, path: (i) => `${shows(i)}/${i.fixture.showId}`, body: () => ({ location: 'Matrix Hall' }), mutates: true },
   'delete /clubs/:clubId/shows/:showId': { allowed: CLUB_OFFICERS, path: (i) => `${shows(i)}/${i.fixture.emptyShowId}`, mutates: true },
   'get /clubs/:clubId/shows/:showId/results': { allowed: CLUB_READERS, path: (i) => `${shows(i)}/${i.fixture.showId}/results` },

@@ -1,4 +1,5 @@
-import { awardsText, classLabel, ordinal, placingText } from './result-words';
+import type { ShowDetail } from '@shared/contracts/shows';
+import { awardsText, classLabel, ordinal, placingText, showSummary } from './result-words';
 
 describe('result words', () => {
   it('writes English ordinals, teens included', () => {
@@ -13,5 +14,20 @@ describe('result words', () => {
     expect(classLabel({ breed: 'Californian', variety: null, sex: 'doe', ageClass: 'intermediate' })).toBe('Californian · Intermediate doe');
     expect(awardsText(['BOV', 'BOSB'])).toBe('BOV (Best of variety), BOSB (Best opposite sex of breed)');
     expect(awardsText([])).toBe('');
+  });
+});
+
+describe('showSummary', () => {
+  const show: ShowDetail = {
+    id: 4, name: 'Winter Show', showDate: '2026-01-17', location: null, hostClub: null, judges: ['T. Quill'], sanctionNo: null, results: 52,
+    counts: { classes: 14, breeds: 3, exhibitors: 9, matched: 40, ageClassMismatches: 2 },
+    judging: [{ judge: 'R. Ambleforth', classes: 9, results: 30 }, { judge: null, classes: 1, results: 1 }],
+  };
+  it('says what the results hold and who judged how many classes', () => {
+    expect(showSummary(show)).toEqual({
+      counts: "14 classes of 3 breeds · 52 results from 9 exhibitors, 40 matched to members' herds · 2 age classes to check against the birth date.",
+      judging: ['R. Ambleforth: 9 classes (30 results)', 'Judge not recorded: 1 class (1 result)'],
+    });
+    expect(showSummary({ ...show, results: 0, judging: [] })).toEqual({ counts: 'No results recorded yet.', judging: [] });
   });
 });

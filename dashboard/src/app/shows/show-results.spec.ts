@@ -3,12 +3,17 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
 import type { ClubRole } from '@shared/contracts/roles';
-import type { Show, ShowResult } from '@shared/contracts/shows';
+import type { Show, ShowDetail, ShowResult } from '@shared/contracts/shows';
 import { signInAs, userWith } from '../session/test-users';
 import { ShowResults } from './show-results';
 import { Shows } from './shows';
 
 const show: Show = { id: 4, name: 'Quill Winter Show', showDate: '2026-01-17', location: 'Ostwick Hall', hostClub: null, judges: ['R. Ambleforth'], sanctionNo: 'QV26-0117', results: 2 };
+const detail: ShowDetail = {
+  ...show,
+  counts: { classes: 1, breeds: 1, exhibitors: 1, matched: 0, ageClassMismatches: 0 },
+  judging: [{ judge: 'R. Ambleforth', classes: 1, results: 2 }],
+};
 const result = (id: number, placing: number, awards: ShowResult['awards'] = []): ShowResult => ({
   id, showId: 4, showName: show.name, showDate: show.showDate, earId: `W${id}`, exhibitor: 'Larrimore Glen Rabbits', breed: 'Mini Rex', variety: 'Black',
   sex: 'buck', ageClass: 'junior', entriesInClass: 4, exhibitorsInClass: 3, placing, awards, judge: 'R. Ambleforth', matched: false,
@@ -33,7 +38,7 @@ describe('ShowResults', () => {
     fixture.componentRef.setInput('showId', '4');
     TestBed.tick();
     backend.expectOne('/api/clubs/3/shows/4/results').flush({ results: [result(2, 2), result(1, 1, ['BOV', 'BOB'])] });
-    backend.expectOne('/api/clubs/3/shows').flush({ shows: [show] });
+    backend.expectOne('/api/clubs/3/shows/4').flush(detail);
     await fixture.whenStable();
     return fixture.nativeElement as HTMLElement;
   }
@@ -41,6 +46,8 @@ describe('ShowResults', () => {
   it('lists the classes in show order with placings among entries and awards spelled out', async () => {
     const el = await open('member');
     expect(el.querySelector('h1')?.textContent).toBe('Quill Winter Show');
+    expect(el.querySelector('.counts')?.textContent).toBe("1 class of 1 breed · 2 results from 1 exhibitor, 0 matched to members' herds.");
+    expect([...el.querySelectorAll('.judging li')].map((li) => li.textContent)).toEqual(['R. Ambleforth: 1 class (2 results)']);
     const rows = [...el.querySelectorAll('tr.mat-mdc-row')].map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent?.replace(/\s+/g, ' ').trim()));
     expect(rows[0].slice(0, 2)).toEqual(['Mini Rex · Black · Junior buck', '1st of 4']);
     expect(rows[0][6]).toBe('BOV (Best of variety) BOB (Best of breed)');

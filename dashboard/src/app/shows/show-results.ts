@@ -20,7 +20,7 @@ import { Session } from '../session/session';
 import { confirmWith } from '../status/confirm-dialog';
 import { describeFailure } from '../status/describe-failure';
 import { LoadError } from '../status/load-error';
-import { classLabel, ordinal } from './result-words';
+import { classLabel, ordinal, showSummary } from './result-words';
 import { ShowsApi } from './shows-api';
 
 const DESKTOP = ['class', 'placing', 'entries', 'exhibitors', 'earId', 'exhibitor', 'awards', 'judge'];
@@ -53,8 +53,12 @@ export class ShowResults {
   readonly clubId = input.required<string>();
   readonly showId = input.required<string>();
   protected readonly results = this.api.results(this.clubId, this.showId);
-  protected readonly shows = this.api.list(this.clubId);
-  protected readonly show = computed(() => (this.shows.hasValue() ? this.shows.value().find((s) => String(s.id) === this.showId()) : undefined));
+  protected readonly detail = this.api.one(this.clubId, this.showId);
+  protected readonly show = computed(() => (this.detail.hasValue() ? this.detail.value() : undefined));
+  protected readonly summary = computed(() => {
+    const s = this.show();
+    return s ? showSummary(s) : null;
+  });
   protected readonly isOfficer = computed(() => clubRoleOf(this.session.user(), this.clubId()) === 'officer');
   protected readonly csvUrl = computed(() => this.api.resultsCsvUrl(this.clubId(), this.showId()));
   private readonly isPhone = toSignal(inject(BreakpointObserver).observe('(max-width: 600px)').pipe(map((s) => s.matches)), { initialValue: false });
@@ -112,7 +116,7 @@ export class ShowResults {
         next: () => {
           this.snackBar.open('Result deleted.', 'OK', { duration: 5000 });
           this.results.reload();
-          this.shows.reload();
+          this.detail.reload();
         },
         error: (err: unknown) => this.snackBar.open(describeFailure(err).message, 'Dismiss'),
       });

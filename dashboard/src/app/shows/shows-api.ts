@@ -2,7 +2,7 @@ import { HttpClient, httpResource } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable } from 'rxjs';
 import * as z from 'zod';
-import { Show, ShowResult } from '@shared/contracts/shows';
+import { Show, ShowDetail, ShowResult } from '@shared/contracts/shows';
 
 const ShowList = z.object({ shows: z.array(Show) });
 const ResultList = z.object({ results: z.array(ShowResult) });
@@ -16,6 +16,11 @@ export class ShowsApi {
 
   list(clubId: () => string) {
     return httpResource(() => showsUrl(clubId()), { parse: (body) => ShowList.parse(body).shows });
+  }
+
+  /** One show with its counts and who judged how many classes. */
+  one(clubId: () => string, showId: () => string) {
+    return httpResource(() => `${showsUrl(clubId())}/${encodeURIComponent(showId())}`, { parse: (body) => ShowDetail.parse(body) });
   }
 
   results(clubId: () => string, showId: () => string) {
