@@ -239,6 +239,22 @@ export const WeightCheckResult = z.object({
   caution: z.string(),
 });
 
+/** A litter the animal sired or mothered, with its mate and counts. */
+export const AnimalLitter = z.object({
+  id: z.number().int(),
+  code: z.string(),
+  /** The other parent (the dam of a buck's litter, the sire of a doe's), when recorded. */
+  mate: z.object({ id: z.number().int(), earId: z.string(), name: z.string().nullable() }).nullable(),
+  bredOn: z.string().nullable(),
+  kindledOn: z.string().nullable(),
+  bornAlive: z.number().int().nullable(),
+  bornDead: z.number().int().nullable(),
+  weaned: z.number().int().nullable(),
+  /** Kits recorded as animals with this litter. */
+  kitsRecorded: z.number().int(),
+});
+export type AnimalLitter = z.infer<typeof AnimalLitter>;
+
 export const AnimalProfile = z.object({
   animal: Animal,
   ageDays: z.number().int().nullable(),
@@ -259,7 +275,8 @@ export const AnimalProfile = z.object({
     }),
   }),
   offspring: z.array(AnimalSummary),
-  litters: z.object({ asSire: z.array(z.number().int()), asDam: z.array(z.number().int()) }),
+  /** Newest first (by kindling, else breeding date). */
+  litters: z.object({ asSire: z.array(AnimalLitter), asDam: z.array(AnimalLitter) }),
   notes: z.array(z.object({ id: z.number().int(), authorName: z.string(), body: z.string(), createdAt: z.string() })),
   registration: z.object({ ready: z.boolean(), missing: z.array(z.string()), caution: z.string() }),
   weightCheck: WeightCheckResult.nullable(),

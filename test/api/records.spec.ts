@@ -156,7 +156,12 @@ describe('animal profile', () => {
 
     const dam = await owner.agent.get(`${herd()}/animals/${fx.damId}`).expect(200);
     expect(dam.body.offspring.map((o: { earId: string }) => o.earId)).toContain('KIT1');
-    expect(dam.body.litters.asDam).toEqual([fx.litterId]);
+    expect(dam.body.litters.asDam).toEqual([{
+      id: fx.litterId, code: 'FIX-L1', mate: { id: fx.sireId, earId: 'SIRE1', name: 'Fixture Sire' }, bredOn: '2025-05-01', kindledOn: '2025-06-01',
+      bornAlive: 6, bornDead: null, weaned: null, kitsRecorded: 1,
+    }]);
+    const sire = await owner.agent.get(`${herd()}/animals/${fx.sireId}`).expect(200);
+    expect(sire.body.litters.asSire.map((l: { mate: { earId: string } }) => l.mate.earId)).toEqual(['DAM1']);
   });
 });
 

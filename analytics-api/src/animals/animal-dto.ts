@@ -1,4 +1,4 @@
-import type { Animal as AnimalDto, AnimalSummary } from '@shared/contracts/animals';
+import type { Animal as AnimalDto, AnimalLitter, AnimalSummary } from '@shared/contracts/animals';
 import type { Animal } from '../db/entities/animal.entity';
 
 export function toSummary(a: Animal): AnimalSummary {
@@ -10,6 +10,16 @@ export function toAnimalDto(a: Animal, breedName: string | null): AnimalDto {
     ...toSummary(a), rabbitryId: a.rabbitryId, breedId: a.breedId, breed: breedName, sireId: a.sireId, damId: a.damId,
     litterId: a.litterId, line: a.line, registrationNo: a.registrationNo, grandChampion: a.grandChampion, breeder: a.breeder,
     stubWeightGrams: a.stubWeightGrams, hasPhoto: a.photoPath !== null, notes: a.notes, keeperDecision: a.keeperDecision,
+  };
+}
+
+/** A litter row of the animal profile's query (with its mate's ear ID and name, and the kits recorded). */
+export function toAnimalLitter(r: Record<string, unknown>): AnimalLitter {
+  return {
+    id: r.id as number, code: r.code as string,
+    mate: r.mate_id === null ? null : { id: r.mate_id as number, earId: r.mate_ear_id as string, name: r.mate_name as string | null },
+    bredOn: r.bred_on as string | null, kindledOn: r.kindled_on as string | null, bornAlive: r.born_alive as number | null,
+    bornDead: r.born_dead as number | null, weaned: r.weaned as number | null, kitsRecorded: Number(r.kits),
   };
 }
 

@@ -21,7 +21,7 @@ import { loadShowRecords } from '../shows/load-show-records';
 import { evaluationDto } from '../evaluations/evaluation-dto';
 import { weightDto } from '../weights/weight-dto';
 import { readWeight } from '../weights/read-weight';
-import { isDuplicateKey, toAnimalDto, toSummary } from './animal-dto';
+import { isDuplicateKey, toAnimalDto, toAnimalLitter, toSummary } from './animal-dto';
 import { findAnimal } from './find-animal';
 import { herdSql } from './herd-query';
 import { resolveParent } from './parent-links';
@@ -231,7 +231,12 @@ export class AnimalsService {
       this.db.query('SELECT id, weighed_on, grams, notes FROM weight_record WHERE animal_id = ? ORDER BY weighed_on', [a.id]),
       this.db.query('SELECT id, evaluated_on, evaluator, scores, notes FROM evaluation WHERE animal_id = ? ORDER BY evaluated_on', [a.id]),
       this.statusHistory(a.id),
-      this.db.query('SELECT id, sire_id, dam_id FROM litter WHERE rabbitry_id = ? AND (sire_id = ? OR dam_id = ?) ORDER BY id', [rabbitryId, a.id, a.id]),
+      this.db.query(
+        `SELECT l.id, l.code, l.sire_id, l.dam_id, l.bred_on, l.kindled_on, l.born_alive, l.born_dead, l.weaned,
+                m.id AS mate_id, m.ear_id AS mate_ear_id, m.name AS mate_name, (SELECT COUNT(*) FROM animal k WHERE k.litter_id = l.id) AS kits
+           FROM litter l LEFT JOIN animal m ON m.id = IF(l.sire_id = ?, l.dam_id, l.sire_id)
+          WHERE l.rabbitry_id = ? AND (l.sire_id = ? OR l.dam_id = ?)
+          ORDER BY COALESCE(l.kindled_on, l.bred_on) DESC, l.id DESC`, [a.id, rabbitryId, a.id, a.id]),
       this.db.query(
         `SELECT n.id, u.display_name AS author, n.body, n.created_at FROM mentor_note n JOIN \`user\` u ON u.id = n.author_id
           WHERE n.rabbitry_id = ? AND n.animal_id = ? ORDER BY n.created_at DESC, n.id DESC`, [rabbitryId, a.id]),
@@ -284,8 +289,8 @@ export class AnimalsService {
       },
       offspring: offspring.map(toSummary),
       litters: {
-        asSire: litters.filter((l: { sire_id: number }) => l.sire_id === a.id).map((l: { id: number }) => l.id),
-        asDam: litters.filter((l: { dam_id: number }) => l.dam_id === a.id).map((l: { id: number }) => l.id),
+        asSire: litters.filter((l: Record<string, unknown>) => l.sire_id === a.id).map(toAnimalLitter),
+        asDam: litters.filter((l: Record<string, unknown>) => l.dam_id === a.id).map(toAnimalLitter),
       },
       notes: notes.map((n: Record<string, unknown>) => ({
         id: n.id as number, authorName: n.author as string, body: n.body as string, createdAt: new Date(n.created_at as string).toISOString(),

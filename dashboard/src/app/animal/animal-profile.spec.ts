@@ -30,7 +30,11 @@ const profile: Profile = {
     grandChampion: { recorded: false, earned: false, completedOn: null, missing: ['2 more legs'] },
   },
   offspring: [summary(11, 'BF150', 'buck')],
-  litters: { asSire: [], asDam: [21] },
+  litters: {
+    asSire: [],
+    asDam: [{ id: 21, code: 'BF-2601', mate: { id: 3, earId: 'BF040', name: 'Rook' }, bredOn: '2026-06-01', kindledOn: '2026-07-02',
+      bornAlive: 5, bornDead: 1, weaned: 5, kitsRecorded: 1 }],
+  },
   notes: [{ id: 1, authorName: 'Ivo Marsh', body: 'Strong shoulders.', createdAt: '2026-11-01T10:00:00.000Z' }],
   registration: { ready: false, missing: ["dam's sire: no weight recorded"], caution: 'A check of the records only.' },
   weightCheck: {
@@ -58,11 +62,6 @@ describe('AnimalProfile', () => {
     backend.expectOne((r) => r.url === '/api/rabbitries/7/animals/5/pedigree' && r.params.get('generations') === '4').flush({ generations: 4, tree });
     backend.expectOne('/api/rabbitries/7/animals/5/evaluations').flush({ traits: DEFAULT_EVALUATION_TRAITS, evaluations: [] });
     backend.expectOne('/api/breeds').flush({ breeds: [] });
-    backend.expectOne('/api/rabbitries/7/litters').flush({
-      caution: 'c',
-      litters: [{ id: 21, code: 'BF-2601', sireId: 3, sireEarId: 'BF040', damId: 5, damEarId: 'BF101', bredOn: '2026-06-01', kindledOn: '2026-07-02',
-        kindlingWindow: null, bornAlive: 5, bornDead: 0, weaned: 5, weight21dGrams: null, kitsRecorded: 1, notes: null }],
-    });
     await fixture.whenStable();
   }
   const text = () => el.textContent?.replace(/\s+/g, ' ') ?? '';
@@ -106,7 +105,10 @@ describe('AnimalProfile', () => {
     expect(section('Show record').textContent).toContain('1st of 7');
     expect(section('Registration readiness').textContent).toContain("dam's sire: no weight recorded");
     expect(section('Status').textContent?.replace(/\s+/g, ' ')).toContain('Sold on 2026-02-01 — to a junior member');
-    expect(section('Offspring and litters').textContent?.replace(/\s+/g, ' ')).toContain('BF-2601 by BF040');
+    const family = section('Offspring and litters');
+    expect(family.querySelector('.litters li')?.textContent?.replace(/\s+/g, ' ').trim())
+      .toBe('BF-2601 by BF040 Rook bred 2026-06-01, kindled 2026-07-02 · 5 born alive, 1 dead · 5 weaned · 1 kit recorded');
+    expect(family.querySelector('.litters li a:nth-of-type(2)')?.getAttribute('href')).toBe('/r/7/animals/3');
     expect(section('Evaluations').textContent).toContain('7 traits worth 100 points');
   });
 

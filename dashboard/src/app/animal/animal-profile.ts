@@ -11,7 +11,6 @@ import type { Animal, AnimalProfile as Profile, KeeperDecision } from '@shared/c
 import { AGE_CLASS_LABELS, ANIMAL_STATUS_LABELS, SEX_LABELS } from '@shared/domain/terms';
 import { BreedsApi } from '../breeds/breeds-api';
 import { AnimalForm, type AnimalFormData } from '../herd/animal-form';
-import { LittersApi } from '../litters/litters-api';
 import { describeAge, localToday } from '../records/describe-age';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
@@ -19,6 +18,7 @@ import { describeFailure } from '../status/describe-failure';
 import { LoadError } from '../status/load-error';
 import { AnimalApi, type Paper } from './animal-api';
 import { EvaluationsPanel } from './evaluations-panel';
+import { litterWords } from './litter-words';
 import { NotesPanel } from './notes-panel';
 import { PedigreeTree } from './pedigree-tree';
 import { ShowRecordPanel } from './show-record-panel';
@@ -59,7 +59,6 @@ export class AnimalProfile {
   protected readonly pedigree = this.api.pedigree(this.rabbitryId, this.animalId);
   protected readonly evaluations = this.api.evaluations(this.rabbitryId, this.animalId);
   protected readonly breeds = inject(BreedsApi).list();
-  protected readonly litters = inject(LittersApi).list(this.rabbitryId);
 
   protected readonly canEdit = computed(() => editsRecords(rabbitryRoleOf(this.session.user(), this.rabbitryId())));
   protected readonly unit = computed(() => this.session.user()?.weightUnit ?? 'lb-oz');
@@ -93,9 +92,7 @@ export class AnimalProfile {
   });
   protected readonly myLitters = computed(() => {
     const p = this.data();
-    if (!p || !this.litters.hasValue()) return [];
-    const ids = new Set([...p.litters.asSire, ...p.litters.asDam]);
-    return this.litters.value().litters.filter((l) => ids.has(l.id));
+    return p ? [...p.litters.asSire, ...p.litters.asDam].map((l) => ({ ...l, words: litterWords(l) })) : [];
   });
 
   protected readonly paper = signal<Paper>('letter');
