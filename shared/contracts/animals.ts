@@ -74,6 +74,18 @@ export const HerdPage = z.object({
 });
 export type HerdPage = z.infer<typeof HerdPage>;
 
+/** A line of the herd with how many animals carry it. */
+export const HerdLine = z.object({
+  line: z.string(),
+  /** Herd animals (not outside parents) of the line, and those of them active. */
+  animals: z.number().int(),
+  active: z.number().int(),
+  /** Outside parents (stubs) recorded with the line. */
+  outside: z.number().int(),
+});
+export type HerdLine = z.infer<typeof HerdLine>;
+export const HerdLines = z.object({ lines: z.array(HerdLine) });
+
 // ---- writing animals --------------------------------------------------------------------
 
 const animalFields = {

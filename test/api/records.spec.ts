@@ -194,6 +194,16 @@ describe('herd table', () => {
     expect(csv.text).toContain(`CSV1,"'=SUM(A1)",doe`);
   });
 
+  it('lists the herd\'s lines with their animals, names differing only in case together', async () => {
+    await addAnimal({ earId: 'LN1', sex: 'doe', line: 'Marsh Gate' });
+    await addAnimal({ earId: 'LN2', sex: 'buck', line: 'marsh gate', status: 'sold' });
+    await addAnimal({ earId: 'LN3', sex: 'buck', line: 'Marsh Gate', isStub: true });
+    const { lines } = (await mentor.agent.get(`${herd()}/lines`).expect(200)).body;
+    expect(lines.filter((l: { line: string }) => l.line.toLowerCase() === 'marsh gate')).toEqual([{ line: expect.any(String), animals: 2, active: 1, outside: 1 }]);
+    const filtered = (await owner.agent.get(`${herd()}/animals?line=marsh%20gate`).expect(200)).body.rows;
+    expect(filtered.map((r: { earId: string }) => r.earId).sort()).toEqual(['LN1', 'LN2']);
+  });
+
   it('answers a page of a 1,000-animal herd with a fixed number of queries (no query per row)', async () => {
     const rabbitryId = Number((await t.db.query("SELECT id FROM rabbitry WHERE name = 'Castellan Meadow'"))[0].id);
     const animals = Array.from({ length: 1000 }, (_, i) => ({

@@ -18,6 +18,9 @@ export function registerAnimalRoutes(r: RouteRegistrar, service: AnimalsService)
     }
     res.json(await service.list(rabbitryId, q));
   });
+  r.add('get', '/rabbitries/:rabbitryId/lines', ANY_RABBITRY_ROLE, async (_req, res) => {
+    res.json({ lines: await service.lines(res.locals.access.rabbitryId!) });
+  });
   r.add('post', base, RABBITRY_EDITORS, async (req, res) => {
     const input = validate(CreateAnimalRequest, req.body);
     res.status(201).json(await service.create(res.locals.access.rabbitryId!, req.user!.weightUnit, input));

@@ -1,6 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type {
-  AnimalProfile, ChangeStatusRequest, CreateAnimalRequest, HerdPage, HerdQuery, HerdRow, KeeperDecision, UpdateAnimalRequest,
+  AnimalProfile, ChangeStatusRequest, CreateAnimalRequest, HerdLine, HerdPage, HerdQuery, HerdRow, KeeperDecision, UpdateAnimalRequest,
 } from '@shared/contracts/animals';
 import { toCsv } from '@shared/csv/to-csv';
 import { ageInDays } from '@shared/domain/age-class';
@@ -78,6 +78,15 @@ export class AnimalsService {
     const today = todayUtc();
     const sql = herdSql(rabbitryId, q, today, false);
     return toCsv(await this.herdRows(await this.db.query(sql.rows.sql, sql.rows.params), today), HERD_CSV_COLUMNS(unit));
+  }
+
+  /** The herd's lines (names differing only in case counted together, under one of their spellings), most animals first. */
+  async lines(rabbitryId: number): Promise<HerdLine[]> {
+    const rows: Record<string, unknown>[] = await this.db.query(
+      `SELECT MIN(line) AS line, SUM(is_stub = 0) AS animals, SUM(is_stub = 0 AND status = 'active') AS active, SUM(is_stub = 1) AS outside
+         FROM animal WHERE rabbitry_id = ? AND line IS NOT NULL AND line <> '' GROUP BY LOWER(line)
+        ORDER BY animals DESC, line`, [rabbitryId]);
+    return rows.map((r) => ({ line: r.line as string, animals: Number(r.animals), active: Number(r.active), outside: Number(r.outside) }));
   }
 
   private async herdRows(rows: Record<string, unknown>[], today: string): Promise<HerdRow[]> {

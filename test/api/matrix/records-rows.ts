@@ -29,6 +29,7 @@ export const recordsRows: Record<string, Row> = {
   'delete /breeds/:breedId': { allowed: ['admin'], path: (i) => `/api/breeds/${i.fixture.unusedBreedId}`, mutates: true },
 
   'get /rabbitries/:rabbitryId/animals': { allowed: HERD_READERS, path: (i) => `${herd(i)}/animals` },
+  'get /rabbitries/:rabbitryId/lines': { allowed: HERD_READERS, path: (i) => `${herd(i)}/lines` },
   'post /rabbitries/:rabbitryId/animals': { allowed: HERD_WRITERS, path: (i) => `${herd(i)}/animals`, body: () => ({ earId: 'NEW1', sex: 'doe' }), mutates: true },
   'get /rabbitries/:rabbitryId/animals/:animalId': { allowed: HERD_READERS, path: animal },
   'patch /rabbitries/:rabbitryId/animals/:animalId': { allowed: HERD_WRITERS, path: animal, body: () => ({ name: 'Renamed Kit' }), mutates: true },

@@ -18,6 +18,7 @@ import { pastDateValidator } from '../records/date-input';
 import { describeFailure } from '../status/describe-failure';
 import { animalChange, animalFormValue, newAnimalRequest, type EditedAnimal } from './animal-request';
 import { HerdApi } from './herd-api';
+import { lineCounts, linesMatching } from './herd-lines';
 
 export interface AnimalFormData {
   rabbitryId: string;
@@ -79,6 +80,11 @@ export class AnimalForm {
     toSignal(this.form.controls[name].valueChanges.pipe(debounceTime(250)), { initialValue: '' });
   protected readonly sires = this.api.parentsMatching(() => this.data.rabbitryId, 'buck', this.typed('sireEarId'));
   protected readonly dams = this.api.parentsMatching(() => this.data.rabbitryId, 'doe', this.typed('damEarId'));
+
+  private readonly lines = this.api.lines(() => this.data.rabbitryId);
+  private readonly lineTyped = toSignal(this.form.controls.line.valueChanges, { initialValue: this.start.line });
+  protected readonly lineChoices = computed(() => linesMatching(this.lines.hasValue() ? this.lines.value() : [], this.lineTyped()));
+  protected readonly lineCounts = lineCounts;
 
   protected readonly saving = signal(false);
   protected readonly failure = signal<string | null>(null);

@@ -2,7 +2,7 @@ import { HttpClient, httpResource } from '@angular/common/http';
 import { Injectable, inject } from '@angular/core';
 import { Observable, map } from 'rxjs';
 import * as z from 'zod';
-import { Animal, CreateAnimalRequest, HerdPage, UpdateAnimalRequest } from '@shared/contracts/animals';
+import { Animal, CreateAnimalRequest, HerdLines, HerdPage, UpdateAnimalRequest } from '@shared/contracts/animals';
 import type { Sex } from '@shared/domain/terms';
 import { herdApiParams, type HerdView } from './herd-view';
 
@@ -20,6 +20,11 @@ export class HerdApi {
     return httpResource(() => ({ url: animalsUrl(rabbitryId()), params: herdApiParams(view()) }), {
       parse: (body) => HerdPage.parse(body),
     });
+  }
+
+  /** The herd's lines with their animal counts, for the line filter and the line field. */
+  lines(rabbitryId: () => string) {
+    return httpResource(() => `/api/rabbitries/${encodeURIComponent(rabbitryId())}/lines`, { parse: (body) => HerdLines.parse(body).lines });
   }
 
   /** Up to 8 animals of a sex whose ear ID or name holds the text, outside parents included. */

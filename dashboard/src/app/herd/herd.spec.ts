@@ -29,6 +29,9 @@ describe('Herd', () => {
     el = fixture.nativeElement;
     TestBed.tick();
     backend.expectOne('/api/breeds').flush({ breeds: [] });
+    backend.expectOne('/api/rabbitries/7/lines').flush({
+      lines: [{ line: 'Ember', animals: 24, active: 18, outside: 2 }, { line: 'Marsh Gate', animals: 3, active: 3, outside: 0 }],
+    });
     answer(herdRequest());
     await fixture.whenStable();
   }
@@ -83,5 +86,16 @@ describe('Herd', () => {
     expect([...el.querySelectorAll('mat-chip')].map((c) => c.textContent?.replace('×', '').trim())).toEqual(['Bucks', 'Juniors today']);
     expect(el.querySelector('.kl-no-data')?.textContent?.trim()).toBe('No animals match these filters.');
     expect(el.querySelector<HTMLAnchorElement>('a[download]')?.getAttribute('href')).toBe('/api/rabbitries/7/animals?sex=buck&ageClass=junior&status=active&format=csv');
+  });
+
+  it('offers the herd’s lines with their counts as the line filter is typed', async () => {
+    await openAs('owner', (r) => r.flush(page([row(1, 'BF101')])));
+    const input = el.querySelector<HTMLInputElement>('input[name="line"]')!;
+    input.dispatchEvent(new Event('focusin'));
+    input.value = 'ga';
+    input.dispatchEvent(new Event('input'));
+    await fixture.whenStable();
+    const options = [...document.querySelectorAll('mat-option')].map((o) => o.textContent?.replace(/\s+/g, ' ').trim());
+    expect(options).toEqual(['Marsh Gate · 3 animals, 3 active']);
   });
 });

@@ -2,6 +2,7 @@ import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, DestroyRef, computed, effect, inject, input, linkedSignal, signal } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
+import { MatAutocompleteModule } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
 import { MatChipsModule } from '@angular/material/chips';
 import { MatDialog } from '@angular/material/dialog';
@@ -25,6 +26,7 @@ import { LoadError } from '../status/load-error';
 import { AnimalForm, type AnimalFormData } from './animal-form';
 import { DESKTOP_COLUMNS, HERD_COLUMNS, PHONE_COLUMNS, headerFor, sortFor } from './herd-columns';
 import { HerdApi } from './herd-api';
+import { lineCounts, linesMatching } from './herd-lines';
 import {
   activeFilters,
   HERD_DEFAULTS,
@@ -45,6 +47,7 @@ import {
   imports: [
     ReactiveFormsModule,
     RouterLink,
+    MatAutocompleteModule,
     MatButtonModule,
     MatChipsModule,
     MatFormFieldModule,
@@ -103,6 +106,10 @@ export class Herd {
 
   protected readonly search = new FormControl(this.view().q ?? '', { nonNullable: true });
   protected readonly lineFilter = new FormControl(this.view().line ?? '', { nonNullable: true });
+  private readonly lines = this.api.lines(this.rabbitryId);
+  private readonly lineTyped = toSignal(this.lineFilter.valueChanges, { initialValue: this.lineFilter.value });
+  protected readonly lineChoices = computed(() => linesMatching(this.lines.hasValue() ? this.lines.value() : [], this.lineTyped()));
+  protected readonly lineCounts = lineCounts;
 
   constructor() {
     const destroyed = inject(DestroyRef);
@@ -144,6 +151,7 @@ export class Herd {
       .subscribe((animal) => {
         if (!animal) return;
         this.page.reload();
+        this.lines.reload();
         this.snackBar
           .open(`${animal.earId} is now in the herd.`, 'Open', { duration: 8000 })
           .onAction()
