@@ -168,7 +168,8 @@ export const HeritabilityEstimate = z.object({
 });
 export type HeritabilityEstimate = z.infer<typeof HeritabilityEstimate>;
 
-export const ScatterPoint = z.object({ x: z.number(), y: z.number(), animalId: int });
+/** One offspring: its value (y) against its midparent's (x), with the animal's ear ID and rabbitry. */
+export const ScatterPoint = z.object({ x: z.number(), y: z.number(), animalId: int, earId: z.string(), rabbitryId: int });
 
 export const HeritabilityReport = z.object({
   ...reportBase,

@@ -121,6 +121,8 @@ describe('analytics on the demo season', () => {
     expect(pooled.scope.rabbitries.map((r) => r.id)).toEqual([herd]);
     expect(pooled.scatter.points.length).toBeGreaterThan(20);
     for (const p of pooled.scatter.points) expect(herdAnimalIds.has(p.animalId)).toBe(true);
+    const named = pooled.scatter.points[0]!;
+    expect(named).toEqual({ x: expect.any(Number), y: expect.any(Number), animalId: expect.any(Number), earId: expect.any(String), rabbitryId: expect.any(Number) });
     expect(JSON.stringify(pooled)).not.toContain('Tinderbrook');
     expect(pooled.plausibleRange).toEqual(expect.objectContaining({ lower: 0.1, upper: 0.45 }));
 

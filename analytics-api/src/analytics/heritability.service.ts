@@ -121,12 +121,12 @@ export function heritabilityEstimates(entry: CacheEntry<HerdData>, trait: string
     const best = candidates.sort((a, b) => a.se - b.se)[0];
     const preferred = best ? { method: best.method, reason: `Smallest standard error (${best.se.toFixed(2)}) of the ${candidates.length} estimate${candidates.length === 1 ? '' : 's'} available.` } : null;
 
-    const points: { x: number; y: number; animalId: number }[] = [];
+    const points: HeritabilityReport['scatter']['points'] = [];
     for (const [id, y] of z) {
       const a = data.animal.get(id)!;
       const s = a.sireId === null ? undefined : z.get(a.sireId);
       const d = a.damId === null ? undefined : z.get(a.damId);
-      if (s !== undefined && d !== undefined) points.push({ x: (s + d) / 2, y, animalId: id });
+      if (s !== undefined && d !== undefined) points.push({ x: (s + d) / 2, y, animalId: id, earId: a.earId, rabbitryId: a.rabbitryId });
     }
     const step = Math.max(1, Math.ceil(points.length / MAX_SCATTER_POINTS));
     const mid = estimates.midparentOffspring;

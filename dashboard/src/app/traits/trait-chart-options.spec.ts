@@ -10,7 +10,9 @@ describe('trait inheritance charts', () => {
   it('plots offspring against midparent with the regression line across the points’ range', () => {
     const o = buildInheritanceScatterOptions(report, DEFAULT_CHART_THEME);
     const [points, line] = o['series'] as Series[];
-    expect(points!.data).toEqual([[-1, -0.5], [0.5, 0.4], [2, 0.1]]);
+    expect(points!.data).toEqual([{ value: [-1, -0.5], earId: 'BF135' }, { value: [0.5, 0.4], earId: 'BF136' }, { value: [2, 0.1], earId: 'BF137' }]);
+    const tooltip = (o['tooltip'] as { formatter: (p: object) => string }).formatter;
+    expect(tooltip({ seriesName: 'Offspring', value: [0.5, 0.4], data: points!.data[1] })).toBe('<b>BF136</b><br>Midparent 0.50 SD<br>Offspring 0.40 SD');
     // y = 0.16 + 0.23x at x = −1 and x = 2: −0.07 and 0.62
     expect(line!.data).toEqual([[-1, -0.07], [2, 0.62]]);
     expect((o['xAxis'] as { name: string }).name).toBe('Midparent (SD)');

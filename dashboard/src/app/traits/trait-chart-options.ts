@@ -44,8 +44,10 @@ export function buildInheritanceScatterOptions(report: HeritabilityReport, theme
       trigger: 'item',
       confine: true,
       textStyle: { fontFamily: theme.font },
-      formatter: (p: { seriesName: string; value: [number, number] }) =>
-        p.seriesName === 'Offspring' ? `Midparent ${p.value[0].toFixed(2)} SD<br>Offspring ${p.value[1].toFixed(2)} SD` : 'Midparent regression',
+      formatter: (p: { seriesName: string; value: [number, number]; data: { earId?: string } }) =>
+        p.seriesName === 'Offspring'
+          ? `<b>${p.data.earId ?? ''}</b><br>Midparent ${p.value[0].toFixed(2)} SD<br>Offspring ${p.value[1].toFixed(2)} SD`
+          : 'Midparent regression',
     },
     xAxis: { type: 'value', name: 'Midparent (SD)', nameLocation: 'middle', nameGap: 30, scale: true, ...axisStyle(theme) },
     yAxis: { type: 'value', name: 'Offspring (SD)', nameLocation: 'middle', nameGap: 36, scale: true, ...axisStyle(theme) },
@@ -55,7 +57,7 @@ export function buildInheritanceScatterOptions(report: HeritabilityReport, theme
         name: 'Offspring',
         symbolSize: 7,
         itemStyle: { color: theme.series[0], opacity: 0.7 },
-        data: points.map((p) => [r3(p.x), r3(p.y)]),
+        data: points.map((p) => ({ value: [r3(p.x), r3(p.y)], earId: p.earId })),
       },
       {
         type: 'line',

@@ -26,7 +26,7 @@ export function heritabilityReport(over: Partial<HeritabilityReport> = {}): Heri
     reading: 'Moderately heritable (h² ≈ 0.23 ± 0.25): selecting on it works, slowly.',
     scatter: {
       xLabel: 'Midparent, SD', yLabel: 'Offspring, SD',
-      points: [{ x: -1, y: -0.5, animalId: 35 }, { x: 0.5, y: 0.4, animalId: 36 }, { x: 2, y: 0.1, animalId: 37 }],
+      points: [{ x: -1, y: -0.5, animalId: 35, earId: 'BF135', rabbitryId: 7 }, { x: 0.5, y: 0.4, animalId: 36, earId: 'BF136', rabbitryId: 7 }, { x: 2, y: 0.1, animalId: 37, earId: 'BF137', rabbitryId: 7 }],
       total: 3,
       line: { slope: 0.23, intercept: 0.16 },
     },

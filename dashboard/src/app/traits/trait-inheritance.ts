@@ -101,12 +101,12 @@ export class TraitInheritance {
     this.sort.set(sort);
   }
 
-  /** Points of this rabbitry's own records open the offspring (pooled points may be another herd's). */
+  /** A point opens its offspring in its own rabbitry (pooled points come from every rabbitry the caller may see). */
   protected open(event: ECElementEvent): void {
     const r = this.shown();
-    if (!r || r.scope.kind !== 'rabbitry' || event.seriesName !== 'Offspring') return;
+    if (!r || event.seriesName !== 'Offspring') return;
     const point = r.scatter.points[event.dataIndex];
-    if (point) void this.router.navigate(['/r', this.rabbitryId(), 'animals', point.animalId]);
+    if (point) void this.router.navigate(['/r', point.rabbitryId, 'animals', point.animalId]);
   }
 
   protected saveCsv(): void {

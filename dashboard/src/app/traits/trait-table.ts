@@ -40,6 +40,8 @@ export function estimateCsvColumns(report: HeritabilityReport): CsvColumn<Herita
 export type ScatterPoint = HeritabilityReport['scatter']['points'][number];
 export function pointCsvColumns(report: HeritabilityReport): CsvColumn<ScatterPoint>[] {
   return [
+    { header: 'Ear ID', value: (p) => p.earId },
+    { header: 'Rabbitry id', value: (p) => p.rabbitryId },
     { header: 'Animal id', value: (p) => p.animalId },
     { header: 'Midparent (SD)', value: (p) => round(p.x) },
     { header: 'Offspring (SD)', value: (p) => round(p.y) },
