@@ -339,7 +339,8 @@ export const INBREEDING_LEVELS = ['none', 'low', 'moderate', 'high'] as const;
 export const PairingsReport = z.object({
   ...reportBase,
   cautions,
-  animal: z.object({ animal: AnimalRef, ebv: z.number().nullable() }),
+  /** accuracy: r = √(1 − PEV/((1 + F)σ²a)) of the breeding value (null when not computed: large herds, confounded effects). */
+  animal: z.object({ animal: AnimalRef, ebv: z.number().nullable(), accuracy: z.number().nullable() }),
   trait: TraitInfo,
   /** Minimum age for breeding used, by breed size (common practice). */
   breedingAgeDays: int,
@@ -352,6 +353,8 @@ export const PairingsReport = z.object({
     /** none 0; low < 1/16; moderate < 1/8; high from 1/8 (as close as half sibs) */
     inbreedingLevel: z.enum(INBREEDING_LEVELS),
     mateEbv: z.number().nullable(),
+    /** r of the mate's breeding value, as `animal.accuracy`. */
+    mateAccuracy: z.number().nullable(),
     /** Mean of the two parents' breeding values, in the trait's standard deviations. */
     expectedOffspringEbv: z.number().nullable(),
     commonAncestors: z.array(CommonAncestor),

@@ -225,6 +225,17 @@ describe('analytics on the demo season', () => {
     const rowIndex = r.matrix.does.findIndex((d) => d.id === doe.id);
     expect(r.matrix.values[rowIndex]![col]).toBeCloseTo(first.expectedInbreeding, 12);
     expect(r.cautions.join(' ')).toMatch(/veterinarian/);
+    // The mates' accuracies are the BLUP's own (same trait and h² as the breeding-values report).
+    const bv = BreedingValuesReport.parse(await get('owner@example.test', `${base()}/breeding-values?trait=weight_12w`));
+    const accuracyOf = new Map(bv.animals.map((x) => [x.animal.id, x.accuracy]));
+    const rated = r.candidates.filter((c) => c.mateEbv !== null);
+    expect(rated.length).toBeGreaterThan(0);
+    for (const c of rated) {
+      expect(c.mateAccuracy).toBe(accuracyOf.get(c.mate.id));
+      expect(c.mateAccuracy).toBeGreaterThan(0);
+      expect(c.mateAccuracy).toBeLessThan(1);
+    }
+    expect(r.animal.accuracy).toBe(accuracyOf.get(doe.id) ?? null);
   });
 
   it('breeding values: converged BLUP, herd animals only, EBVs follow the own records', async () => {

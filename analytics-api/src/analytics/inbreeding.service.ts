@@ -163,8 +163,10 @@ export function pairingsReport(ctx: HerdContext, q: PairingsQuery): PairingsRepo
     return age === null || age >= minAge;
   });
   const h2 = chooseHeritability(ctx.visible, q.trait, undefined);
-  const ebvs = blupRun(ctx.herd, q.trait, h2.value).ebv;
+  const run = blupRun(ctx.herd, q.trait, h2.value);
+  const ebvs = run.ebv;
   if (ebvs.size === 0) warnings.push(`No records of ${info.label.toLowerCase()} in this herd: breeding values are not given.`);
+  else if (run.accuracy.size === 0) warnings.push('Accuracies of the breeding values are not given: the herd has too many animals for the exact computation, or its contemporary groups and sexes are confounded.');
   const own = ebvs.get(animal.id) ?? null;
   const i = rel.ped.pedigree.indexOf.get(animal.id)!;
   const mates = breeders.filter((a) => a.sex !== animal.sex);
@@ -173,6 +175,7 @@ export function pairingsReport(ctx: HerdContext, q: PairingsQuery): PairingsRepo
     const j = rel.ped.pedigree.indexOf.get(m.id)!;
     const f = rel.a(i, j) / 2;
     const mateEbv = ebvs.get(m.id) ?? null;
+    const mateAccuracy = mateEbv === null ? null : (run.accuracy.get(m.id) ?? null);
     const notes: string[] = [];
     if (!m.birthDate) notes.push('No birth date: taken to be of breeding age.');
     if (f >= 0.125) notes.push('High expected inbreeding: as close as a half-sib mating or closer.');
@@ -182,6 +185,7 @@ export function pairingsReport(ctx: HerdContext, q: PairingsQuery): PairingsRepo
       expectedInbreeding: f,
       inbreedingLevel: level(f),
       mateEbv,
+      mateAccuracy,
       expectedOffspringEbv: own !== null && mateEbv !== null ? (own + mateEbv) / 2 : null,
       j,
       notes,
@@ -211,7 +215,7 @@ export function pairingsReport(ctx: HerdContext, q: PairingsQuery): PairingsRepo
     asOf: ctx.asOf,
     warnings,
     cautions: [...BREEDING_CAUTIONS],
-    animal: { animal: animalRef(data, animal), ebv: own },
+    animal: { animal: animalRef(data, animal), ebv: own, accuracy: own === null ? null : (run.accuracy.get(animal.id) ?? null) },
     trait: info,
     breedingAgeDays: minAge,
     candidatesConsidered: mates.length,

@@ -24,17 +24,17 @@ const report: PairingsReport = {
   asOf: '2026-12-01',
   warnings: [],
   cautions: CAUTIONS,
-  animal: { animal: lark, ebv: -0.1247 },
+  animal: { animal: lark, ebv: -0.1247, accuracy: 0.4119 },
   trait: { key: 'weight_12w', label: 'Weight at 12 weeks', kind: 'weight', unit: 'grams', standardAgeDays: 84, toleranceDays: 10 },
   breedingAgeDays: 152,
   candidatesConsidered: 2,
   candidates: [
     {
-      rank: 1, mate: cobble, ageDays: 494, expectedInbreeding: 0.0234375, inbreedingLevel: 'low', mateEbv: 0.2326, expectedOffspringEbv: 0.054,
+      rank: 1, mate: cobble, ageDays: 494, expectedInbreeding: 0.0234375, inbreedingLevel: 'low', mateEbv: 0.2326, mateAccuracy: 0.5371, expectedOffspringEbv: 0.054,
       commonAncestors: [], notes: [],
     },
     {
-      rank: 2, mate: ivy, ageDays: 366, expectedInbreeding: 0.3046875, inbreedingLevel: 'high', mateEbv: 0.3233, expectedOffspringEbv: 0.0993,
+      rank: 2, mate: ivy, ageDays: 366, expectedInbreeding: 0.3046875, inbreedingLevel: 'high', mateEbv: 0.3233, mateAccuracy: null, expectedOffspringEbv: 0.0993,
       commonAncestors: [{ animal: aster, contribution: 0.140625, share: 0.4615 }, { animal: null, contribution: 0.0625, share: 0.2051 }],
       notes: ['High expected inbreeding: as close as a half-sib mating or closer.'],
     },
@@ -83,10 +83,10 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     expect(request.request.params.get('trait')).toBe('weight_16w');
     request.flush(report);
     await fixture.whenStable();
-    expect(el.querySelector('.summary')?.textContent?.replace(/\s+/g, ' ')).toContain('Planning for BF100 Lark (doe, Mini Rex, Ember line), breeding value −0.12 SD');
+    expect(el.querySelector('.summary')?.textContent?.replace(/\s+/g, ' ')).toContain('Planning for BF100 Lark (doe, Mini Rex, Ember line), breeding value −0.12 SD (accuracy 0.41) for weight at 12 weeks.');
     expect(rows()).toEqual([
-      ['1', 'BF118Cobble II · Blue', 'Ember', '16 months', '2.3 %less than first cousins', '+0.23 SD', '+0.05 SD', 'Distant (under 1/32)'],
-      ['2', 'BF143Ivy II · Blue', 'Ember', '16 months', '30.5 %as close as full sibs or parent × offspring', '+0.32 SD', '+0.10 SD',
+      ['1', 'BF118Cobble II · Blue', 'Ember', '16 months', '2.3 %less than first cousins', '+0.23 SD', '0.54', '+0.05 SD', 'Distant (under 1/32)'],
+      ['2', 'BF143Ivy II · Blue', 'Ember', '16 months', '30.5 %as close as full sibs or parent × offspring', '+0.32 SD', '—', '+0.10 SD',
         'BF056 Aster 46 %, an unrecorded ancestor 21 % High expected inbreeding: as close as a half-sib mating or closer.'],
     ]);
     expect(el.querySelector('kl-caution-note')?.textContent).toContain(CAUTIONS[0]);
@@ -144,8 +144,8 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     const bytes = new Uint8Array(await saved!.arrayBuffer());
     expect([...bytes.slice(0, 3)]).toEqual([0xef, 0xbb, 0xbf]); // the UTF-8 byte-order mark spreadsheets look for
     const text = await saved!.text();
-    expect(text.split('\r\n')[0]).toBe('Rank,Mate ear ID,Mate name,Sex,Variety,Line,Age (days),Expected inbreeding F,Inbreeding band,Mate breeding value (SD),Expected litter breeding value (SD),Common ancestors (share of F),Notes');
-    expect(text).toContain(`1,BF118,"'=HYPERLINK(""x"")",buck,Blue,Ember,494,0.02344,Under 6.25 %,0.233,0.054,,`);
+    expect(text.split('\r\n')[0]).toBe('Rank,Mate ear ID,Mate name,Sex,Variety,Line,Age (days),Expected inbreeding F,Inbreeding band,Mate breeding value (SD),Mate breeding value accuracy (r),Expected litter breeding value (SD),Common ancestors (share of F),Notes');
+    expect(text).toContain(`1,BF118,"'=HYPERLINK(""x"")",buck,Blue,Ember,494,0.02344,Under 6.25 %,0.233,0.537,0.054,,`);
   });
 
   it('says so when the pairings cannot be worked out, and tries again', async () => {

@@ -29,7 +29,7 @@ import { CautionNote } from './caution-note';
 import { formatInbreeding, inbreedingBand, INBREEDING_BANDS } from './inbreeding-bands';
 import { PairingApi } from './pairing-api';
 import { animalLabel, buildPairingHeatmapOptions, heatmapSize, INBREEDING_RAMP } from './pairing-heatmap-options';
-import { ancestorsText, CANDIDATE_CSV, CANDIDATE_SORT, formatEbv, GRID_CSV, gridCells } from './pairing-table';
+import { ancestorsText, CANDIDATE_CSV, CANDIDATE_SORT, formatAccuracy, formatEbv, GRID_CSV, gridCells } from './pairing-table';
 import { PAIRING_LIMITS, pairingParams, pairingViewFrom, traitChoices, type PairingView } from './pairing-view';
 
 /** Shown before any report has come, so the note is there from the first look. */
@@ -97,7 +97,7 @@ export class PairingPlanner {
 
   protected readonly order = signal<RowOrder>({ active: 'rank', direction: 'asc' });
   protected readonly candidates = computed(() => sortRows(this.data()?.candidates ?? [], this.order(), CANDIDATE_SORT));
-  protected readonly columns = ['rank', 'mate', 'line', 'age', 'inbreeding', 'mateEbv', 'offspringEbv', 'ancestors'];
+  protected readonly columns = ['rank', 'mate', 'line', 'age', 'inbreeding', 'mateEbv', 'mateAccuracy', 'offspringEbv', 'ancestors'];
   protected readonly mateWord = computed(() => (this.planned()?.animal.sex === 'buck' ? 'does' : 'bucks'));
 
   // The theme is read when the first chart is drawn: only an element in the page inherits the variables.
@@ -126,6 +126,7 @@ export class PairingPlanner {
   protected readonly formatF = formatInbreeding;
   protected readonly band = inbreedingBand;
   protected readonly formatEbv = formatEbv;
+  protected readonly formatAccuracy = formatAccuracy;
   protected readonly ancestorsText = ancestorsText;
   protected readonly sexLabel = SEX_LABELS;
   protected readonly ageOf = (birthDate: string | null) => describeAge(birthDate, this.data()?.asOf ?? '');

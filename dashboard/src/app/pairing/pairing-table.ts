@@ -13,6 +13,11 @@ export function formatEbv(value: number | null): string {
   return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${Math.abs(rounded).toFixed(2)} SD`;
 }
 
+/** The accuracy r of a breeding value (0 = pedigree tells nothing, 1 = certain): 0.4512 → "accuracy 0.45". */
+export function formatAccuracy(r: number | null): string {
+  return r === null ? 'accuracy not known' : `accuracy ${r.toFixed(2)}`;
+}
+
 /**
  * The ancestors behind a pair's inbreeding, biggest share first, in words:
  * "BF056 Aster 46 %, BF053 Garnet 21 %". Ancestors outside the records are "an unrecorded ancestor".
@@ -30,6 +35,7 @@ export const CANDIDATE_SORT: SortKeys<Candidate> = {
   age: (c) => c.ageDays,
   inbreeding: (c) => c.expectedInbreeding,
   mateEbv: (c) => c.mateEbv,
+  mateAccuracy: (c) => c.mateAccuracy,
   offspringEbv: (c) => c.expectedOffspringEbv,
 };
 
@@ -44,6 +50,7 @@ export const CANDIDATE_CSV: readonly CsvColumn<Candidate>[] = [
   { header: 'Expected inbreeding F', value: (c) => round(c.expectedInbreeding, 5) },
   { header: 'Inbreeding band', value: (c) => inbreedingBand(c.expectedInbreeding).label },
   { header: 'Mate breeding value (SD)', value: (c) => (c.mateEbv === null ? null : round(c.mateEbv, 3)) },
+  { header: 'Mate breeding value accuracy (r)', value: (c) => (c.mateAccuracy === null ? null : round(c.mateAccuracy, 3)) },
   { header: 'Expected litter breeding value (SD)', value: (c) => (c.expectedOffspringEbv === null ? null : round(c.expectedOffspringEbv, 3)) },
   { header: 'Common ancestors (share of F)', value: (c) => ancestorsText(c.commonAncestors) },
   { header: 'Notes', value: (c) => c.notes.join(' ') },
