@@ -572,18 +572,34 @@ export const LinesQuery = z.object({
   groupBy: z.enum(['line', 'rabbitry']).default('line'),
   /** One of LINE_MEASURES or an evaluation trait key; all when omitted. */
   measure: TraitKey.optional(),
-});
+  /** Animals compared: of a breed (id), of a sex, born from / to (a cohort); their records count whatever their date. */
+  breed: id.optional(),
+  sex: sexSchema.optional(),
+  from: IsoDate.optional(),
+  to: IsoDate.optional(),
+}).refine((q) => !q.from || !q.to || q.from <= q.to, { message: 'The range ends on or after its start', path: ['to'] });
 export type LinesQuery = z.infer<typeof LinesQuery>;
 
 export const LinesReport = z.object({
   ...reportBase,
+  cautions,
+  /** The filters in force, in words (e.g. "Mini Rex does born 2025-01-01 to 2025-12-31"), or null. */
+  filtered: z.string().nullable(),
   groupBy: z.enum(['line', 'rabbitry']),
   groups: z.array(z.object({ key: z.string(), label: z.string(), animals: int })),
   measures: z.array(z.object({
     key: z.string(),
     label: z.string(),
     unit: z.string(),
-    groups: z.array(z.object({ key: z.string(), summary: DistributionSummary.nullable() })),
+    groups: z.array(z.object({
+      key: z.string(),
+      summary: DistributionSummary.nullable(),
+      /**
+       * Distribution-free 95 % interval for the median: order statistics of ranks r and n − r + 1
+       * (binomial, Conover 1999 §3.2), with its exact coverage; null below 6 values.
+       */
+      medianInterval: z.object({ lower: z.number(), upper: z.number(), lowerRank: int, upperRank: int, coverage: z.number(), n: int }).nullable(),
+    })),
   })),
 });
 export type LinesReport = z.infer<typeof LinesReport>;

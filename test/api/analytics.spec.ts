@@ -283,6 +283,28 @@ describe('analytics on the demo season', () => {
     await get('owner@example.test', `${base()}/keepers?weights=looks:3`, 400);
   });
 
+  it('keepers: each rank explained in a breeder\'s words, weights in the reader\'s unit', async () => {
+    const lbOz = KeepersReport.parse(await get('owner@example.test', `${base()}/keepers`));
+    for (const c of lbOz.candidates) {
+      const [first, ...risks] = c.explanation;
+      expect(first).toMatch(new RegExp(`^Ranked ${c.rank}(st|nd|rd|th)( \\(tied\\))? of ${lbOz.candidates.length}: `));
+      // No engine names or standardised scores.
+      expect(first).not.toMatch(/breedingValue|weightOnTarget|parentsPlacementIndex|ownEvaluation| SD\b|z =/);
+      expect(risks).toEqual(c.weightFlags.filter((f) => f.disqualificationRisk).map((f) => f.message));
+    }
+    const projected = lbOz.candidates.filter((c) => c.explanation[0]!.includes('projected senior weight'));
+    expect(projected.length).toBeGreaterThan(0);
+    for (const c of projected) expect(c.explanation[0]).toMatch(/projected senior weight \d+ lb \d+ oz/);
+    await t.db.query("UPDATE user SET weight_unit = 'kg' WHERE email = 'mentor@example.test'");
+    try {
+      const kg = KeepersReport.parse(await get('mentor@example.test', `${base()}/keepers`));
+      const same = kg.candidates.find((c) => c.animal.id === projected[0]!.animal.id)!;
+      expect(same.explanation[0]).toMatch(/projected senior weight \d+\.\d{2} kg/);
+    } finally {
+      await t.db.query("UPDATE user SET weight_unit = 'lb-oz' WHERE email = 'mentor@example.test'");
+    }
+  });
+
   it('lines: quartiles per line, and per rabbitry only over what the caller may see', async () => {
     const r = LinesReport.parse(await get('owner@example.test', `${base()}/lines`));
     expect(r.groups.map((g) => g.label).sort()).toEqual(['Ember', 'Slate']);
@@ -295,6 +317,37 @@ describe('analytics on the demo season', () => {
     expect(all.groups).toHaveLength(4);
     expect(all.measures.map((m) => m.key)).toEqual(['weight_12w_percentile']);
     await get('owner@example.test', `${base()}/lines?measure=ear_length`, 400);
+  });
+
+  it('lines: each median with its order-statistic interval, the breeding cautions, and breed / sex / birth-date filters', async () => {
+    const r = LinesReport.parse(await get('owner@example.test', `${base()}/lines`));
+    expect(r.cautions.join(' ')).toMatch(/smaller litters/);
+    expect(r.filtered).toBeNull();
+    let checked = 0;
+    for (const m of r.measures) {
+      for (const g of m.groups) {
+        if (!g.summary) continue;
+        if (g.summary.n < 6) { expect(g.medianInterval).toBeNull(); continue; }
+        const ci = g.medianInterval!;
+        expect(ci.n).toBe(g.summary.n);
+        expect(ci.lowerRank + ci.upperRank).toBe(ci.n + 1);
+        expect(ci.lower).toBeLessThanOrEqual(g.summary.median);
+        expect(ci.upper).toBeGreaterThanOrEqual(g.summary.median);
+        expect(ci.coverage).toBeGreaterThanOrEqual(0.95);
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(4);
+
+    const [{ n }] = await t.db.query(
+      "SELECT COUNT(*) AS n FROM animal WHERE rabbitry_id = ? AND NOT is_stub AND sex = 'doe' AND birth_date BETWEEN '2024-01-01' AND '2026-12-31'", [herd]);
+    const does = LinesReport.parse(await get('owner@example.test', `${base()}/lines?measure=inbreeding&sex=doe&from=2024-01-01&to=2026-12-31`));
+    expect(does.filtered).toBe('Does born 2024-01-01 to 2026-12-31');
+    expect(does.measures[0]!.groups.reduce((s, g) => s + (g.summary?.n ?? 0), 0)).toBe(Number(n));
+    const [breed] = await t.db.query('SELECT b.id, b.name FROM animal a JOIN breed b ON b.id = a.breed_id WHERE a.rabbitry_id = ? LIMIT 1', [herd]);
+    const ofBreed = LinesReport.parse(await get('owner@example.test', `${base()}/lines?breed=${breed.id}&sex=buck`));
+    expect(ofBreed.filtered).toBe(`${breed.name} bucks`);
+    await get('owner@example.test', `${base()}/lines?from=2026-02-01&to=2026-01-01`, 400);
   });
 
   it('sends an unchanged report gzipped with an entity tag, and answers a conditional request with 304', async () => {

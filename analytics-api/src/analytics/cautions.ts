@@ -13,6 +13,11 @@ export const BREEDING_CAUTIONS: readonly string[] = [
   'These figures support your judgment; they do not replace a judge, the official breed standard or a veterinarian.',
 ];
 
+export const LINE_CAUTIONS: readonly string[] = [
+  'A line’s figures also carry how its animals were fed, housed and shown; compare lines kept alike.',
+  ...BREEDING_CAUTIONS,
+];
+
 export const KEEPER_CAUTIONS: readonly string[] = [
   'Weights and projections guide; check each animal on the scale and against the current official standard before a show.',
   'Contagious disease travels with show stock: quarantine animals coming back from shows, and follow local rules for sales and shows.',

@@ -1,18 +1,32 @@
 import { LINE_MEASURES, type LinesQuery, type LinesReport } from '@shared/contracts/analytics';
 import { AppError } from '../http/app-error';
+import { SEX_LABELS } from '@shared/domain/terms';
 import { distributionSummary } from '../stats/distribution-summary';
+import { medianInterval } from '../stats/median-interval';
 import { percentileOfWeighing } from '../stats/percentile-of-weighing';
 import { placementScore } from '../stats/placement-score';
 import { type HerdContext, pedigreeOf, traitOf } from './analytics-context';
 import type { AnimalRow } from './analytics.repository';
 import { growthReferenceOf } from './growth.service';
-import { herdAnimals } from './herd-data';
+import { LINE_CAUTIONS } from './cautions';
+import { herdAnimals, type HerdData } from './herd-data';
 
 const NO_LINE = '(no line)';
 
+/** The filters in words: "Mini Rex does born 2025-01-01 to 2025-12-31", or null without filters. */
+function filterWords(data: HerdData, q: LinesQuery): string | null {
+  const breed = q.breed === undefined ? null : (data.breeds.get(q.breed)?.name ?? `breed ${q.breed}`);
+  const who = [breed, q.sex ? SEX_LABELS[q.sex].toLowerCase() + 's' : null].filter(Boolean).join(' ');
+  const born = q.from && q.to ? `born ${q.from} to ${q.to}` : q.from ? `born on or after ${q.from}` : q.to ? `born on or before ${q.to}` : null;
+  if (!who && !born) return null;
+  const text = [who || 'Animals', born].filter(Boolean).join(' ');
+  return text[0]!.toUpperCase() + text.slice(1);
+}
+
 /**
  * Line comparison: per group (the herd's lines, or the rabbitries the caller may see) the
- * distribution (distributionSummary: n, quartiles by type 7) of 12-week-weight percentile
+ * distribution (distributionSummary: n, quartiles by type 7) with a distribution-free 95 %
+ * interval for the median (medianInterval: binomial order statistics) of 12-week-weight percentile
  * (against the pooled reference of its breed and sex), placement score per result, each
  * evaluation trait (% of the breed template's points, first evaluation), litter size weaned
  * (litters by the group's does) and inbreeding.
@@ -21,7 +35,10 @@ export function linesReport(ctx: HerdContext, q: LinesQuery): LinesReport {
   const byRabbitry = q.groupBy === 'rabbitry';
   const entry = byRabbitry ? ctx.visible : ctx.herd;
   const data = entry.data;
-  const animals = herdAnimals(data, byRabbitry ? data.rabbitryIds : [ctx.rabbitryId]);
+  const inScope = herdAnimals(data, byRabbitry ? data.rabbitryIds : [ctx.rabbitryId]);
+  // A cohort: of the breed and sex asked for, born in the range (animals without a birth date only when no range is given).
+  const animals = inScope.filter((a) => (q.breed === undefined || a.breedId === q.breed) && (q.sex === undefined || a.sex === q.sex)
+    && (q.from === undefined || (a.birthDate !== null && a.birthDate >= q.from)) && (q.to === undefined || (a.birthDate !== null && a.birthDate <= q.to)));
   const groupOf = (a: AnimalRow) => (byRabbitry ? String(a.rabbitryId) : (a.line ?? NO_LINE));
   const labelOf = new Map<string, string>(byRabbitry ? data.rabbitries.map((r) => [String(r.id), r.name]) : []);
   const groups = new Map<string, AnimalRow[]>();
@@ -51,7 +68,7 @@ export function linesReport(ctx: HerdContext, q: LinesQuery): LinesReport {
     key, label, unit,
     groups: keys.map((g) => {
       const values = valuesOf(groups.get(g)!);
-      return { key: g, summary: values.length > 0 ? distributionSummary(values) : null };
+      return { key: g, summary: values.length > 0 ? distributionSummary(values) : null, medianInterval: medianInterval(values) };
     }),
   });
   const measures: LinesReport['measures'] = [];
@@ -91,14 +108,20 @@ export function linesReport(ctx: HerdContext, q: LinesQuery): LinesReport {
     }
   }
   const warnings: string[] = [];
-  if (animals.length === 0) warnings.push(byRabbitry ? 'None of the rabbitries you may see has animals yet.' : 'This rabbitry has no animals yet: lines need animals.');
+  const filtered = filterWords(data, q);
+  if (animals.length === 0 && filtered && inScope.length > 0) warnings.push(`No animals match the filters (${filtered.toLowerCase()}).`);
+  else if (animals.length === 0) warnings.push(byRabbitry ? 'None of the rabbitries you may see has animals yet.' : 'This rabbitry has no animals yet: lines need animals.');
   else if (keys.length < 2) warnings.push(byRabbitry ? 'Only one rabbitry to compare: a mentor of several herds sees them side by side here.' : 'Only one line in this herd: record each animal’s line to compare lines.');
   const small = keys.filter((g) => groups.get(g)!.length < 10);
   if (small.length > 0) warnings.push(`${small.length} group${small.length === 1 ? ' has' : 's have'} fewer than 10 animals: their quartiles are rough.`);
+  const noInterval = measures.reduce((n, m) => n + m.groups.filter((g) => g.summary && !g.medianInterval).length, 0);
+  if (noInterval > 0) warnings.push(`${noInterval} median${noInterval === 1 ? '' : 's'} rest${noInterval === 1 ? 's' : ''} on fewer than 6 values: no 95 % interval can be given for ${noInterval === 1 ? 'it' : 'them'}.`);
   return {
     scope: ctx.scopeInfo,
     asOf: ctx.asOf,
     warnings,
+    cautions: [...LINE_CAUTIONS],
+    filtered,
     groupBy: q.groupBy,
     groups: keys.map((g) => ({ key: g, label: labelOf.get(g) ?? g, animals: groups.get(g)!.length })),
     measures,

@@ -10,15 +10,19 @@ import { LineComparison } from './line-comparison';
 import { PanelChart } from './panel-chart';
 
 const summary = (n: number, median: number) => ({ n, min: median - 40, q1: median - 20, median, q3: median + 20, max: median + 40, mean: median + 1 });
+const interval = (n: number, lower: number, upper: number) => ({ lower, upper, lowerRank: 2, upperRank: n - 1, coverage: 0.96, n });
+const CAUTIONS = ['A line’s figures also carry how its animals were fed, housed and shown; compare lines kept alike.'];
 const report: LinesReport = {
   scope: { kind: 'rabbitry', rabbitries: [{ id: 7, name: 'Brackenrow' }], description: 'Brackenrow only.' },
   asOf: '2026-12-01',
   warnings: ['1 group has fewer than 10 animals: their quartiles are rough.'],
+  cautions: CAUTIONS,
+  filtered: null,
   groupBy: 'line',
   groups: [{ key: 'Ember', label: 'Ember', animals: 146 }, { key: 'Slate', label: 'Slate', animals: 9 }],
   measures: [
-    { key: 'weight_12w_percentile', label: 'Weight at 12 weeks (percentile of breed and sex)', unit: 'percentile', groups: [{ key: 'Ember', summary: summary(92, 52) }, { key: 'Slate', summary: summary(8, 41) }] },
-    { key: 'placement_score', label: 'Placement score per show result', unit: 'score (0 = last, 1 = won)', groups: [{ key: 'Ember', summary: { n: 141, min: 0, q1: 0.4, median: 0.67, q3: 0.9, max: 1, mean: 0.64 } }, { key: 'Slate', summary: null }] },
+    { key: 'weight_12w_percentile', label: 'Weight at 12 weeks (percentile of breed and sex)', unit: 'percentile', groups: [{ key: 'Ember', summary: summary(92, 52), medianInterval: interval(92, 45, 58) }, { key: 'Slate', summary: summary(8, 41), medianInterval: interval(8, 12, 77) }] },
+    { key: 'placement_score', label: 'Placement score per show result', unit: 'score (0 = last, 1 = won)', groups: [{ key: 'Ember', summary: { n: 141, min: 0, q1: 0.4, median: 0.67, q3: 0.9, max: 1, mean: 0.64 }, medianInterval: interval(141, 0.6, 0.75) }, { key: 'Slate', summary: null, medianInterval: null }] },
   ],
 };
 
@@ -39,6 +43,7 @@ describe('LineComparison', { timeout: 20_000 }, () => {
     fixture.componentRef.setInput('rabbitryId', '7');
     el = fixture.nativeElement;
     TestBed.tick();
+    backend.expectOne('/api/breeds').flush({ breeds: [] });
     if (answer) {
       linesRequest().flush(answer);
       await fixture.whenStable();
@@ -54,12 +59,29 @@ describe('LineComparison', { timeout: 20_000 }, () => {
     const axis = (charts()[1]!.options() as { xAxis: { axisLabel: { formatter: (v: string, i: number) => string } } }).xAxis.axisLabel;
     expect(axis.formatter('', 1)).toBe('Slate\n{small|no records}');
     expect(rows()).toEqual([
-      ['Weight at 12 weeks (percentile of breed and sex)percentile', 'Ember', '92', '32', '52', '72', '12–92', '53'],
-      ['Weight at 12 weeks (percentile of breed and sex)percentile', 'Slate', '8 small', '21', '41', '61', '1–81', '42'],
-      ['Placement score per show resultscore (0 = last, 1 = won)', 'Ember', '141', '0.40', '0.67', '0.90', '0.00–1.00', '0.64'],
-      ['Placement score per show resultscore (0 = last, 1 = won)', 'Slate', '0 no records', '—', '—', '—', '—', '—'],
+      ['Weight at 12 weeks (percentile of breed and sex)percentile', 'Ember', '92', '32', '52', '45–58', '72', '12–92', '53'],
+      ['Weight at 12 weeks (percentile of breed and sex)percentile', 'Slate', '8 small', '21', '41', '12–77', '61', '1–81', '42'],
+      ['Placement score per show resultscore (0 = last, 1 = won)', 'Ember', '141', '0.40', '0.67', '0.60–0.75', '0.90', '0.00–1.00', '0.64'],
+      ['Placement score per show resultscore (0 = last, 1 = won)', 'Slate', '0 no records', '—', '—', '—', '—', '—', '—'],
     ]);
     expect(el.textContent).toContain('1 group has fewer than 10 animals');
+    expect(el.querySelector('kl-caution-note')?.textContent).toContain(CAUTIONS[0]);
+  });
+
+  it('asks the API for the breed, sex and birth dates the address holds, and says them', async () => {
+    await open('/?breed=2&sex=doe&from=2025-01-01&to=2025-12-31', null);
+    const request = linesRequest();
+    expect(request.request.params.keys().sort()).toEqual(['breed', 'from', 'groupBy', 'sex', 'to']);
+    expect(request.request.params.get('breed')).toBe('2');
+    expect(request.request.params.get('sex')).toBe('doe');
+    request.flush({ ...report, filtered: 'Mini Rex does born 2025-01-01 to 2025-12-31' });
+    await fixture.whenStable();
+    expect(el.textContent).toContain('Brackenrow only. Mini Rex does born 2025-01-01 to 2025-12-31.');
+    expect(el.querySelector<HTMLInputElement>('input[name="from"]')?.value).toBe('2025-01-01');
+    [...el.querySelectorAll('button')].find((b) => b.textContent?.trim() === 'Clear filters')!.click();
+    await fixture.whenStable();
+    TestBed.tick();
+    expect(linesRequest().request.params.keys()).toEqual(['groupBy']);
   });
 
   it('shows one measure alone when the address names it, and asks for rabbitries when chosen', async () => {
@@ -85,8 +107,8 @@ describe('LineComparison', { timeout: 20_000 }, () => {
     vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
     [...el.querySelectorAll('button')].find((b) => b.textContent?.trim() === 'Download CSV')!.click();
     const lines = (await saved!.text()).split('\r\n');
-    expect(lines[0]).toBe('Measure,Unit,Group,Animals in group,n,Minimum,Lower quartile,Median,Upper quartile,Maximum,Mean,Small group (n < 10)');
-    expect(lines[2]).toBe('Weight at 12 weeks (percentile of breed and sex),percentile,Slate,9,8,1,21,41,61,81,42,yes');
+    expect(lines[0]).toBe('Measure,Unit,Group,Animals in group,n,Minimum,Lower quartile,Median,Median 95 % lower,Median 95 % upper,Interval coverage,Upper quartile,Maximum,Mean,Small group (n < 10)');
+    expect(lines[2]).toBe('Weight at 12 weeks (percentile of breed and sex),percentile,Slate,9,8,1,21,41,12,77,0.96,61,81,42,yes');
   });
 
   it('shows loading, then an error with a way to try again', async () => {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -10,24 +10,17 @@ import { MatTableModule } from '@angular/material/table';
 import { ActivatedRoute, Router } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
 import { map } from 'rxjs';
+import { BreedsApi } from '../breeds/breeds-api';
 import { CautionNote } from '../pairing/caution-note';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { LoadError } from '../status/load-error';
 import { buildLineBoxplotOptions, formatMeasure } from './lines-chart-options';
 import { LinesApi } from './lines-api';
-import { LINE_SORT, lineCsv, lineRows } from './lines-table';
-import { linesParams, linesViewFrom, MIN_N_CHOICES, type LinesView } from './lines-view';
+import { LINE_SORT, lineCsv, lineRows, medianIntervalText } from './lines-table';
+import { linesApiParams, linesParams, linesViewFrom, MIN_N_CHOICES, type LinesView } from './lines-view';
 import { PanelChart } from './panel-chart';
 import { readPanelTheme, type PanelTheme } from './panel-theme';
 import { sortRows, type RowOrder } from './sort-rows';
-
-/** Cautions beside a comparison that informs which lines to keep breeding from. */
-const LINE_CAUTIONS = [
-  'A line’s figures also carry how its animals were fed, housed and shown; compare lines kept alike.',
-  'Groups marked small have too few animals for their quartiles to be trusted; look at the animals themselves.',
-  'Closing a herd onto one line raises inbreeding: smaller litters and stronger faults follow as well as virtues.',
-  'These figures support your judgment; they do not replace a judge, the official breed standard or a veterinarian.',
-];
 
 /** Line comparison: the herd's lines (or the rabbitries the user may see) side by side as box plots of each measure. */
 @Component({
@@ -60,11 +53,18 @@ export class LineComparison {
   protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => linesViewFrom(p))), {
     initialValue: linesViewFrom(this.route.snapshot.queryParams),
   });
-  protected readonly report = this.api.report(this.rabbitryId, () => this.view().groupBy);
+  protected readonly report = this.api.report(this.rabbitryId, () => linesApiParams(this.view()));
   protected readonly data = computed(() => (this.report.hasValue() ? this.report.value() : undefined));
-  protected readonly cautions = LINE_CAUTIONS;
+  /** The report's cautions (the API's breeding cautions), kept in view while the next filters load. */
+  protected readonly cautions = linkedSignal<readonly string[] | undefined, readonly string[]>({
+    source: () => this.data()?.cautions,
+    computation: (next, previous) => next ?? previous?.value ?? [],
+  });
+  protected readonly breeds = inject(BreedsApi).list();
+  protected readonly filtersSet = computed(() => ['breed', 'sex', 'from', 'to'].some((k) => this.view()[k] !== undefined));
   protected readonly minNChoices = MIN_N_CHOICES;
   protected readonly format = formatMeasure;
+  protected readonly intervalText = medianIntervalText;
 
   /** The measures shown: the one asked for (when the report has it), else all. */
   protected readonly measures = computed(() => {
@@ -92,11 +92,23 @@ export class LineComparison {
   protected readonly order = signal<RowOrder>({ active: '', direction: '' });
   protected readonly rows = computed(() => sortRows(lineRows(this.measures(), this.data()?.groups ?? [], this.view().minN), this.order(), LINE_SORT));
   // One measure shown: its name is the chart's caption, not a column repeated on every row.
-  protected readonly columns = computed(() => [...(this.single() ? [] : ['measure']), 'group', 'n', 'q1', 'median', 'q3', 'range', 'mean']);
+  protected readonly columns = computed(() => [...(this.single() ? [] : ['measure']), 'group', 'n', 'q1', 'median', 'medianInterval', 'q3', 'range', 'mean']);
   protected readonly noAnimals = computed(() => (this.data()?.groups.length ?? 0) === 0);
 
   protected setView(change: Partial<LinesView>): void {
     void this.router.navigate([], { relativeTo: this.route, queryParams: linesParams({ ...this.view(), ...change }) });
+  }
+
+  protected filter(key: 'breed' | 'sex' | 'from' | 'to', value: string | number | undefined): void {
+    this.setView({ [key]: value === '' || value === 0 ? undefined : value });
+  }
+
+  protected dateFilter(key: 'from' | 'to', event: Event): void {
+    this.filter(key, (event.target as HTMLInputElement).value || undefined);
+  }
+
+  protected clearFilters(): void {
+    this.setView({ breed: undefined, sex: undefined, from: undefined, to: undefined });
   }
 
   protected sortBy(sort: Sort): void {

@@ -2,12 +2,12 @@ import { httpResource } from '@angular/common/http';
 import { Injectable } from '@angular/core';
 import { LinesReport } from '@shared/contracts/analytics';
 
-/** Line comparison's read: every measure of the chosen grouping at once (a few kilobytes), so switching measures is instant. */
+/** Line comparison's read: every measure of the chosen grouping and filters at once (a few kilobytes), so switching measures is instant. */
 @Injectable({ providedIn: 'root' })
 export class LinesApi {
-  report(rabbitryId: () => string, groupBy: () => 'line' | 'rabbitry') {
+  report(rabbitryId: () => string, params: () => Record<string, string>) {
     return httpResource(
-      () => ({ url: `/api/rabbitries/${encodeURIComponent(rabbitryId())}/analytics/lines`, params: { groupBy: groupBy() } }),
+      () => ({ url: `/api/rabbitries/${encodeURIComponent(rabbitryId())}/analytics/lines`, params: params() }),
       { parse: (body) => LinesReport.parse(body) },
     );
   }

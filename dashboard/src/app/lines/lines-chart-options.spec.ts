@@ -14,9 +14,9 @@ const measure: LineMeasure = {
   label: 'Weight at 12 weeks (percentile of breed and sex)',
   unit: 'percentile',
   groups: [
-    { key: 'Ember', summary: { n: 92, min: 3, q1: 31, median: 52, q3: 74, max: 98, mean: 51.6 } },
-    { key: 'Slate', summary: { n: 8, min: 12, q1: 20, median: 41, q3: 55, max: 90, mean: 42.2 } },
-    { key: '(no line)', summary: null },
+    { key: 'Ember', summary: { n: 92, min: 3, q1: 31, median: 52, q3: 74, max: 98, mean: 51.6 }, medianInterval: { lower: 45, upper: 58, lowerRank: 37, upperRank: 56, coverage: 0.9573, n: 92 } },
+    { key: 'Slate', summary: { n: 8, min: 12, q1: 20, median: 41, q3: 55, max: 90, mean: 42.2 }, medianInterval: { lower: 12, upper: 90, lowerRank: 1, upperRank: 8, coverage: 0.9922, n: 8 } },
+    { key: '(no line)', summary: null, medianInterval: null },
   ],
 };
 type Box = { data: { value: number[]; itemStyle?: { borderType?: string } }[] };
@@ -49,7 +49,7 @@ describe('buildLineBoxplotOptions', () => {
   it('says every quartile, the mean and n in the tooltip', () => {
     const tooltip = options()['tooltip'] as { formatter: (p: { dataIndex: number }) => string };
     expect(tooltip.formatter({ dataIndex: 1 })).toBe(
-      '<b>Slate</b> — n = 8 (small group)<br>Maximum 90<br>Upper quartile 55<br>Median 41<br>Lower quartile 20<br>Minimum 12<br>Mean 42 (percentile)',
+      '<b>Slate</b> — n = 8 (small group)<br>Maximum 90<br>Upper quartile 55<br>Median 41 (95 %: 12–90)<br>Lower quartile 20<br>Minimum 12<br>Mean 42 (percentile)',
     );
     expect(tooltip.formatter({ dataIndex: 2 })).toBe('(no line): no records');
   });

@@ -49,7 +49,7 @@ export function buildLineBoxplotOptions(input: BoxplotInput): EChartsCoreOption 
   const minN = input.minN ?? SMALL_GROUP;
   const labelOf = new Map(input.groups.map((g) => [g.key, g.label]));
   const hue = theme.series[0]!;
-  const rows = measure.groups.map((g) => ({ key: g.key, label: labelOf.get(g.key) ?? g.key, summary: g.summary }));
+  const rows = measure.groups.map((g) => ({ key: g.key, label: labelOf.get(g.key) ?? g.key, summary: g.summary, interval: g.medianInterval }));
   const axis = axisStyle(theme);
   return {
     animation: false,
@@ -66,7 +66,9 @@ export function buildLineBoxplotOptions(input: BoxplotInput): EChartsCoreOption 
         const f = (v: number) => formatMeasure(v, measure.unit);
         return [
           `<b>${row.label}</b> — n = ${s.n}${s.n < minN ? ' (small group)' : ''}`,
-          `Maximum ${f(s.max)}`, `Upper quartile ${f(s.q3)}`, `Median ${f(s.median)}`, `Lower quartile ${f(s.q1)}`, `Minimum ${f(s.min)}`,
+          `Maximum ${f(s.max)}`, `Upper quartile ${f(s.q3)}`,
+          `Median ${f(s.median)}${row.interval ? ` (95 %: ${f(row.interval.lower)}–${f(row.interval.upper)})` : ''}`,
+          `Lower quartile ${f(s.q1)}`, `Minimum ${f(s.min)}`,
           `Mean ${f(s.mean)} (${measure.unit})`,
         ].join('<br>');
       },

@@ -1,6 +1,6 @@
 import type { DistributionSummary } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
-import { SMALL_GROUP, type LineGroup, type LineMeasure } from './lines-chart-options';
+import { formatMeasure, SMALL_GROUP, type LineGroup, type LineMeasure } from './lines-chart-options';
 import type { SortKeys } from './sort-rows';
 
 /** One group's distribution of one measure: a row of the comparison table. */
@@ -11,6 +11,7 @@ export interface LineRow {
   group: string;
   animals: number;
   summary: DistributionSummary | null;
+  medianInterval: LineMeasure['groups'][number]['medianInterval'];
   small: boolean;
 }
 
@@ -25,6 +26,7 @@ export function lineRows(measures: readonly LineMeasure[], groups: readonly Line
       group: byKey.get(g.key)?.label ?? g.key,
       animals: byKey.get(g.key)?.animals ?? 0,
       summary: g.summary,
+      medianInterval: g.medianInterval,
       small: !g.summary || g.summary.n < minN,
     })),
   );
@@ -40,6 +42,12 @@ export const LINE_SORT: SortKeys<LineRow> = {
   mean: (r) => r.summary?.mean ?? null,
 };
 
+/** "45–58" in the measure's precision; a dash where the group has no interval (fewer than 6 values). */
+export function medianIntervalText(r: Pick<LineRow, 'medianInterval' | 'summary' | 'unit'>): string {
+  if (!r.medianInterval) return r.summary ? 'too few values' : '—';
+  return `${formatMeasure(r.medianInterval.lower, r.unit)}–${formatMeasure(r.medianInterval.upper, r.unit)}`;
+}
+
 const stat = (key: keyof DistributionSummary) => (r: LineRow) => r.summary?.[key] ?? null;
 
 /** The table as a file, its last column naming the threshold in force. */
@@ -53,6 +61,9 @@ export function lineCsv(minN: number): readonly CsvColumn<LineRow>[] {
     { header: 'Minimum', value: stat('min') },
     { header: 'Lower quartile', value: stat('q1') },
     { header: 'Median', value: stat('median') },
+    { header: 'Median 95 % lower', value: (r) => r.medianInterval?.lower ?? null },
+    { header: 'Median 95 % upper', value: (r) => r.medianInterval?.upper ?? null },
+    { header: 'Interval coverage', value: (r) => (r.medianInterval ? Math.round(r.medianInterval.coverage * 10000) / 10000 : null) },
     { header: 'Upper quartile', value: stat('q3') },
     { header: 'Maximum', value: stat('max') },
     { header: 'Mean', value: stat('mean') },
