@@ -53,7 +53,7 @@ export function registerAnalyticsRoutes(r: RouteRegistrar, service: AnalyticsSer
     sendReport(req, res, await service.breedingValues(res.locals.access, validate(BreedingValuesQuery, req.query)));
   });
   r.add('get', `${herd}/keepers`, ANY_RABBITRY_ROLE, async (req, res) => {
-    sendReport(req, res, await service.keepers(res.locals.access, validate(KeepersQuery, req.query)));
+    sendReport(req, res, await service.keepers(res.locals.access, validate(KeepersQuery, req.query), req.user!.weightUnit));
   });
   r.add('get', `${herd}/lines`, ANY_RABBITRY_ROLE, async (req, res) => {
     sendReport(req, res, await service.lines(res.locals.access, validate(LinesQuery, req.query)));

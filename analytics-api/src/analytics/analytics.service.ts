@@ -5,6 +5,7 @@ import type {
   BreedingValuesQuery, GrowthQuery, HeritabilityQuery, KeepersQuery, LinesQuery, PairingsQuery, PlacementQuery,
   RelationshipQuery, SeasonQuery, SeasonSettings, SeasonSettingsRequest,
 } from '@shared/contracts/analytics';
+import type { UnitSetting } from '@shared/units/weight';
 import type { ResolvedAccess } from '../access/access-rules';
 import { todayUtc } from '../animals/record-dates';
 import { StampedCache, type StampedCacheOptions } from './analytics-cache';
@@ -136,8 +137,9 @@ export class AnalyticsService {
     return this.respond(access, 'breeding-values', q, { pooled: q.scope === 'all', visible: true }, (ctx) => breedingValuesReport(ctx, q.trait, q.h2));
   }
 
-  keepers(access: ResolvedAccess, q: KeepersQuery) {
-    return this.respond(access, 'keepers', q, { pooled: false, visible: true }, (ctx) => keepersReport(ctx, q));
+  /** The explanations speak the reader's weight unit, so the unit is part of the report's key. */
+  keepers(access: ResolvedAccess, q: KeepersQuery, unit: UnitSetting) {
+    return this.respond(access, 'keepers', { ...q, unit }, { pooled: false, visible: true }, (ctx) => keepersReport(ctx, q, unit));
   }
 
   lines(access: ResolvedAccess, q: LinesQuery) {

@@ -2,10 +2,12 @@ import {
   KEEPER_COMPONENT_LABELS, KEEPER_COMPONENTS, type KeeperComponent, type KeepersQuery, type KeepersReport,
 } from '@shared/contracts/analytics';
 import { ageClassOn } from '@shared/domain/age-class';
+import { explainKeeper } from '@shared/domain/keeper-explanation';
 import { checkWeightAgainstLimits } from '@shared/domain/weight-check';
+import type { UnitSetting } from '@shared/units/weight';
 import { keeperIndex } from '../stats/keeper-index';
 import { placementIndex } from '../stats/placement-index';
-import { type HerdContext, pedigreeOf, sentence } from './analytics-context';
+import { type HerdContext, pedigreeOf } from './analytics-context';
 import type { AnimalRow } from './analytics.repository';
 import { blupRun, chooseHeritability } from './breeding-values.service';
 import { KEEPER_CAUTIONS } from './cautions';
@@ -45,9 +47,10 @@ function offspringPlacementIndex(data: HerdData, parentId: number | null): numbe
  * template's points), weight on target (−% of the projected senior weight from the breed's
  * ideal), parents' placement index (mean of sire's and dam's, over their offspring's results),
  * inbreeding (a penalty) — with every component, the projected senior weight, weight flags
- * (disqualification risk) and the keeper decision recorded on the animal.
+ * (disqualification risk), the keeper decision recorded on the animal, and why each stands
+ * where it does in a breeder's words, weights in the reader's unit (explainKeeper).
  */
-export function keepersReport(ctx: HerdContext, q: KeepersQuery): KeepersReport {
+export function keepersReport(ctx: HerdContext, q: KeepersQuery, unit: UnitSetting): KeepersReport {
   const data = ctx.herd.data;
   const weights = Object.fromEntries(KEEPER_COMPONENTS.map((c) => [c, q.weights?.[c] ?? 1])) as Record<KeeperComponent, number>;
   const juniors = herdAnimals(data, [ctx.rabbitryId]).filter((a) => a.status === 'active' && a.birthDate !== null && a.birthDate <= ctx.asOf
@@ -76,14 +79,8 @@ export function keepersReport(ctx: HerdContext, q: KeepersQuery): KeepersReport 
     };
     return { a, projection, latest, components };
   });
-  // Labels as component names, so the index's own explanations read in a breeder's words.
   const label = (c: KeeperComponent) => (c === 'breedingValue' ? `${KEEPER_COMPONENT_LABELS[c]} (${run.values.info.label.toLowerCase()})` : KEEPER_COMPONENT_LABELS[c]);
-  const byLabel = new Map(KEEPER_COMPONENTS.map((c) => [label(c), c]));
-  const scores = keeperIndex(
-    facts.map((f) => ({ id: String(f.a.id), components: Object.fromEntries(KEEPER_COMPONENTS.map((c) => [label(c), f.components[c]])) })),
-    Object.fromEntries(KEEPER_COMPONENTS.map((c) => [label(c), weights[c]])),
-    Object.fromEntries(KEEPER_COMPONENTS.map((c) => [label(c), DIRECTION[c]])),
-  );
+  const scores = keeperIndex(facts.map((f) => ({ id: String(f.a.id), components: f.components })), weights, DIRECTION);
   const factOf = new Map(facts.map((f) => [String(f.a.id), f]));
   const candidates = scores.map((s) => {
     const f = factOf.get(s.id)!;
@@ -107,15 +104,16 @@ export function keepersReport(ctx: HerdContext, q: KeepersQuery): KeepersReport 
       ageDays: ageOn(f.a, ctx.asOf)!,
       rank: s.rank,
       total: s.total,
-      components: s.contributions.map((c) => ({ component: byLabel.get(c.component)!, label: c.component, value: c.value, z: c.z, weight: c.weight, contribution: c.contribution })),
+      components: s.contributions.map((c) => ({ ...c, component: c.component as KeeperComponent, label: label(c.component as KeeperComponent) })),
       latestWeight: f.latest ? { weighedOn: f.latest.weighedOn, grams: f.latest.grams } : null,
       projectedSeniorWeight: f.projection,
       weightFlags: flags,
       disqualificationRisk: flags.some((x) => x.disqualificationRisk),
       keeperDecision: f.a.keeperDecision,
-      explanation: [...s.explanation.map(sentence), ...s.notes.map(sentence), ...flags.filter((x) => x.disqualificationRisk).map((x) => x.message)],
+      explanation: [] as string[],
     };
   });
+  for (const c of candidates) c.explanation = explainKeeper(c, candidates, run.values.info, unit);
   return {
     scope: ctx.scopeInfo,
     asOf: ctx.asOf,

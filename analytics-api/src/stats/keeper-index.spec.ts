@@ -23,18 +23,14 @@ describe('keeperIndex', () => {
       ['breedingValue', expect.closeTo(1, 12), expect.closeTo(2, 12)],
       ['inbreeding', expect.closeTo(-1, 12), expect.closeTo(-1, 12)],
     ]);
-    expect(c.explanation).toEqual([
-      "breedingValue +2.00 (1.00 SD from the candidates' average × weight 2)",
-      "inbreeding −1.00 (−1.00 SD from the candidates' average × weight 1)",
-    ]);
   });
 
-  it("counts a missing component as the candidates' average, with a note", () => {
+  it("counts a missing component as the candidates' average, its value kept null", () => {
     // ownEvaluation 80, 90: mean 85, SD 7.071 → B −0.7071, C 0.7071, A missing → 0
     const scores = keeperIndex(candidates, { ownEvaluation: 1 });
     const a = scores.find((s) => s.id === 'A')!;
     expect(a.total).toBe(0);
-    expect(a.notes).toEqual(["ownEvaluation missing: counted as the candidates' average"]);
+    expect(a.contributions).toEqual([{ component: 'ownEvaluation', value: null, z: 0, weight: 1, contribution: 0 }]);
     expect(scores.find((s) => s.id === 'C')!.total).toBeCloseTo(Math.SQRT1_2, 12);
   });
 

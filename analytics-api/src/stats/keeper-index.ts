@@ -21,9 +21,6 @@ export interface KeeperScore {
   total: number;
   rank: number;
   contributions: KeeperContribution[];
-  /** the strongest contributions, largest |contribution| first, as sentences */
-  explanation: string[];
-  notes: string[];
 }
 
 /** Components where less is better unless the caller says otherwise. */
@@ -33,23 +30,20 @@ export const KEEPER_PENALTIES: Readonly<Record<string, -1>> = { inbreeding: -1 }
  * Keeper index: a transparent weighted sum of standardised components. For each weighted
  * component, z = direction·(x − x̄)/s over the candidates that have it (s the sample SD;
  * direction +1, or −1 for penalties such as inbreeding); a missing value counts as the
- * candidates' average (z = 0, with a note), as does every value when fewer than 2 candidates
+ * candidates' average (z = 0; its value stays null), as does every value when fewer than 2 candidates
  * have it or they are all equal. contribution = weight·z, total = Σ contributions, rank by
  * total (competitionRanks). `weightOnTarget` is expected as a closeness score (higher =
  * nearer the breed's target). O(c·k) for c candidates and k components.
  *
  * @param direction +1 or −1 per component (default +1; −1 for KEEPER_PENALTIES)
- * @param explain how many contributions to explain per candidate (default 3)
  * @throws when a weight is not finite or a value is not finite
  */
 export function keeperIndex(
   candidates: readonly KeeperCandidate[],
   weights: Readonly<Record<string, number>>,
   direction: Readonly<Record<string, 1 | -1>> = {},
-  explain = 3,
 ): KeeperScore[] {
   const components = Object.keys(weights).filter((c) => weights[c] !== 0);
-  const notes = candidates.map((): string[] => []);
   const standardised = components.map((component) => {
     if (!Number.isFinite(weights[component])) throw new Error(`keeperIndex requires a finite weight for ${component}`);
     const sign = direction[component] ?? KEEPER_PENALTIES[component] ?? 1;
@@ -58,13 +52,7 @@ export function keeperIndex(
     if (present.some((v) => !Number.isFinite(v))) throw new Error(`keeperIndex requires finite values of ${component}`);
     const centre = present.length > 0 ? mean(present) : 0;
     const sd = present.length >= 2 ? sampleStandardDeviation(present) : 0;
-    return values.map((v, i) => {
-      if (v === null) {
-        notes[i].push(`${component} missing: counted as the candidates' average`);
-        return 0;
-      }
-      return sd > 0 ? (sign * (v - centre)) / sd : 0;
-    });
+    return values.map((v) => (v !== null && sd > 0 ? (sign * (v - centre)) / sd : 0));
   });
   const totals: number[] = [];
   const scored = candidates.map((candidate, i) => {
@@ -77,12 +65,7 @@ export function keeperIndex(
     }));
     const total = contributions.reduce((sum, c) => sum + c.contribution, 0);
     totals.push(total);
-    const explanation = [...contributions]
-      .filter((c) => c.contribution !== 0)
-      .sort((a, b) => Math.abs(b.contribution) - Math.abs(a.contribution))
-      .slice(0, explain)
-      .map((c) => `${c.component} ${c.contribution > 0 ? '+' : '−'}${Math.abs(c.contribution).toFixed(2)} (${c.z >= 0 ? '' : '−'}${Math.abs(c.z).toFixed(2)} SD from the candidates' average × weight ${c.weight})`);
-    return { id: candidate.id, total, rank: 0, contributions, explanation, notes: notes[i] };
+    return { id: candidate.id, total, rank: 0, contributions };
   });
   const ranks = competitionRanks(totals);
   scored.forEach((s, i) => (s.rank = ranks[i]));

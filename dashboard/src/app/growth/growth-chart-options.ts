@@ -1,10 +1,10 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { GrowthAnimal, GrowthReferenceReport } from '@shared/contracts/analytics';
+import { ordinal } from '@shared/domain/ordinal';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import { axisValue } from '../animal/weight-chart-options';
 import { axisStyle, chartBase, type ChartTheme } from '../keepers/chart-theme';
 import { intervalLegend, intervalSeries } from '../keepers/interval-series';
-import { ordinal } from '../shows/result-words';
 
 export interface GrowthChartInput {
   reference: GrowthReferenceReport | null;

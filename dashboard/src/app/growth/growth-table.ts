@@ -1,8 +1,8 @@
 import type { GrowthAnimal, GrowthReferenceReport } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
+import { ordinal } from '@shared/domain/ordinal';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import { sortRows, type SortDirection } from '../keepers/sort-rows';
-import { ordinal } from '../shows/result-words';
 import { centileText } from './growth-chart-options';
 
 /** One weighing of a chosen animal, as the table lists it. */

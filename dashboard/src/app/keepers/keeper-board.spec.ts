@@ -10,7 +10,10 @@ import { KeeperBoard } from './keeper-board';
 import { candidate, keepersReport } from './keeper-fixtures';
 
 const board = keepersReport([
-  candidate({ id: 1, earId: 'BF177', rank: 1, z: [1.27, 0, 0.45, -0.45, 0.45] }),
+  candidate({
+    id: 1, earId: 'BF177', rank: 1, z: [1.27, 0, 0.45, -0.45, 0.45],
+    explanation: ['Ranked 1st of 2: strong breeding value for weight at 12 weeks; projected senior weight 3 lb 15 oz, 7 % under the ideal.'],
+  }),
   candidate({
     id: 2, earId: 'BF175', rank: 2, z: [-1.48, 0.04, 0.8, 1.79, -1.79], keeperDecision: 'sell', disqualificationRisk: true,
     weightFlags: [{ kind: 'projected', status: 'over-maximum', disqualificationRisk: true, message: 'Projected over the senior maximum: disqualification risk.' }],

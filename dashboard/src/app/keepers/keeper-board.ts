@@ -30,7 +30,7 @@ import {
   DECISION_LABELS, componentValue, contributionText, keeperCsvColumns, partOf, sortKeeperRows, type KeeperSortKey,
 } from './keeper-table';
 import { KEEPER_DEFAULTS, KEEPER_WEIGHT_RANGE, keeperParams, keeperViewFrom, type KeeperView } from './keeper-view';
-import { explainKeeper, type KeeperCandidate } from './keeper-words';
+import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
 import { KeepersApi } from './keepers-api';
 import { PanelChart } from './panel-chart';
 
@@ -102,11 +102,8 @@ export class KeeperBoard {
 
   private readonly sort = signal<Sort>({ active: 'rank', direction: '' });
   protected readonly rows = computed(() => sortKeeperRows(this.candidates(), this.sort().active as KeeperSortKey, this.sort().direction));
-  protected readonly explanations = computed(() => {
-    const report = this.shown();
-    const all = this.candidates();
-    return new Map(all.map((c) => [c.animal.id, report ? explainKeeper(c, all, report.trait, this.unit()) : '']));
-  });
+  /** The API's explanation of each rank, in the user's weight unit. */
+  protected readonly explanations = computed(() => new Map(this.candidates().map((c) => [c.animal.id, c.explanation.join(' ')])));
   protected readonly columns = computed(() => [
     // The decision comes early: it is what the breeder came to do, and must not scroll out of view.
     'rank', 'earId', 'total', 'decision', ...KEEPER_COMPONENTS.filter((c) => this.view().weights[c] !== 0), 'projected',
@@ -159,7 +156,7 @@ export class KeeperBoard {
     const report = this.shown();
     if (!report) return;
     const rabbitry = report.scope.rabbitries.find((r) => String(r.id) === this.rabbitryId())?.name;
-    downloadCsv(csvFileName(rabbitry, 'keeper board', report.asOf), this.rows(), keeperCsvColumns(this.candidates(), report.trait, this.unit(), (c) => this.decisionOf(c)));
+    downloadCsv(csvFileName(rabbitry, 'keeper board', report.asOf), this.rows(), keeperCsvColumns(this.unit(), (c) => this.decisionOf(c)));
   }
 
   protected savePng(): void {

@@ -1,7 +1,7 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent } from '@shared/contracts/analytics';
 import { axisStyle, chartBase, type ChartTheme } from './chart-theme';
-import type { KeeperCandidate } from './keeper-words';
+import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
 
 export interface KeeperChartInput {
   candidates: readonly KeeperCandidate[];

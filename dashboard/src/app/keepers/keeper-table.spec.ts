@@ -1,5 +1,5 @@
 import { toCsv } from '@shared/csv/to-csv';
-import { candidate, keepersReport } from './keeper-fixtures';
+import { candidate } from './keeper-fixtures';
 import { componentValue, keeperCsvColumns, projectedText, sortKeeperRows } from './keeper-table';
 
 describe('keeper table', () => {
@@ -27,14 +27,13 @@ describe('keeper table', () => {
   });
 
   it('exports every component’s value, weight and contribution, the decision and the explanation, formula-safe', () => {
-    const a = candidate({ id: 1, earId: '=BF1', rank: 1, z: [1, 0, 0, 0, 0] });
-    const report = keepersReport([a]);
-    const csv = toCsv([a], keeperCsvColumns([a], report.trait, 'lb-oz', () => 'keep'));
+    const a = candidate({ id: 1, earId: '=BF1', rank: 1, z: [1, 0, 0, 0, 0], explanation: ['Ranked 1st of 1: strong breeding value for weight at 12 weeks.', 'A risk.'] });
+    const csv = toCsv([a], keeperCsvColumns('lb-oz', () => 'keep'));
     const [header, row] = csv.split('\r\n');
     expect(header).toContain('Breeding value contribution');
     expect(header!.split(',')).toHaveLength(8 + 15 + 5);
     expect(row).toMatch(/^1,"'=BF1",/);
     expect(row).toContain(',Keep,');
-    expect(row).toContain('Ranked 1st of 1');
+    expect(row).toContain('Ranked 1st of 1: strong breeding value for weight at 12 weeks. A risk.');
   });
 });

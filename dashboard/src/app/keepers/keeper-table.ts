@@ -1,8 +1,8 @@
-import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent, type TraitInfo } from '@shared/contracts/analytics';
+import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent } from '@shared/contracts/analytics';
 import type { KeeperDecision } from '@shared/contracts/animals';
 import type { CsvColumn } from '@shared/csv/to-csv';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
-import { explainKeeper, type KeeperCandidate } from './keeper-words';
+import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
 import { sortRows, type SortDirection } from './sort-rows';
 
 export const DECISION_LABELS: Record<KeeperDecision, string> = { keep: 'Keep', sell: 'Sell', undecided: 'Undecided' };
@@ -58,7 +58,7 @@ export function sortKeeperRows(rows: readonly KeeperCandidate[], key: KeeperSort
 
 /** The board as a file: every number of the chart and the table, with the explanation. */
 export function keeperCsvColumns(
-  all: readonly KeeperCandidate[], trait: TraitInfo, unit: UnitSetting, decisionOf: (c: KeeperCandidate) => KeeperDecision | null,
+  unit: UnitSetting, decisionOf: (c: KeeperCandidate) => KeeperDecision | null,
 ): CsvColumn<KeeperCandidate>[] {
   return [
     { header: 'Rank', value: (c) => c.rank },
@@ -78,6 +78,6 @@ export function keeperCsvColumns(
     { header: 'Projected senior weight', value: (c) => projectedText(c, unit) },
     { header: 'Disqualification risk', value: (c) => (c.disqualificationRisk ? 'yes' : 'no') },
     { header: 'Decision', value: (c) => { const d = decisionOf(c); return d ? DECISION_LABELS[d] : ''; } },
-    { header: 'Explanation', value: (c) => explainKeeper(c, all, trait, unit) },
+    { header: 'Explanation', value: (c) => c.explanation.join(' ') },
   ];
 }

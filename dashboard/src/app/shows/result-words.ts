@@ -1,13 +1,8 @@
 import type { ShowDetail } from '@shared/contracts/shows';
 import { AWARD_LABELS, type Award } from '@shared/domain/awards';
+import { ordinal } from '@shared/domain/ordinal';
 import { AGE_CLASS_LABELS, type AgeClass, type Sex } from '@shared/domain/terms';
 
-/** 1st, 2nd, 3rd, 4th … 11th, 12th, 13th, 21st, 22nd. O(1). */
-export function ordinal(n: number): string {
-  const tens = n % 100;
-  if (tens >= 11 && tens <= 13) return `${n}th`;
-  return `${n}${['th', 'st', 'nd', 'rd'][n % 10] ?? 'th'}`;
-}
 
 /** "1st of 7": a placing only means something beside the size of its class. */
 export function placingText(placing: number, entriesInClass: number): string {

@@ -14,13 +14,14 @@ import { RouterLink } from '@angular/router';
 import { filter, map, switchMap } from 'rxjs';
 import type { ShowResult } from '@shared/contracts/shows';
 import { AWARD_LABELS, type Award } from '@shared/domain/awards';
+import { ordinal } from '@shared/domain/ordinal';
 import { AGE_CLASSES } from '@shared/domain/terms';
 import { clubRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
 import { confirmWith } from '../status/confirm-dialog';
 import { describeFailure } from '../status/describe-failure';
 import { LoadError } from '../status/load-error';
-import { classLabel, ordinal, showSummary } from './result-words';
+import { classLabel, showSummary } from './result-words';
 import { ShowsApi } from './shows-api';
 
 const DESKTOP = ['class', 'placing', 'entries', 'exhibitors', 'earId', 'exhibitor', 'awards', 'judge'];

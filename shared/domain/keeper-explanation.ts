@@ -1,6 +1,6 @@
-import type { KeepersReport, TraitInfo } from '@shared/contracts/analytics';
-import { formatWeight, type UnitSetting } from '@shared/units/weight';
-import { ordinal } from '../shows/result-words';
+import type { KeepersReport, TraitInfo } from '../contracts/analytics';
+import { formatWeight, type UnitSetting } from '../units/weight';
+import { ordinal } from './ordinal';
 
 export type KeeperCandidate = KeepersReport['candidates'][number];
 type Contribution = KeeperCandidate['components'][number];
@@ -19,7 +19,7 @@ export function standing(z: number): 'strong' | 'good' | 'average' | 'below-aver
 
 const percent = (v: number, digits = 0) => `${v.toFixed(digits)} %`;
 
-/** The projected senior weight, how far from the breed's ideal, in the user's unit. */
+/** The projected senior weight, how far from the breed's ideal, in the reader's unit. */
 function projectedWords(c: KeeperCandidate, unit: UnitSetting): string | null {
   const p = c.projectedSeniorWeight;
   if (!p) return null;
@@ -45,7 +45,7 @@ export function componentWords(part: Contribution, c: KeeperCandidate, trait: Tr
     case 'weightOnTarget':
       return projectedWords(c, unit) ?? 'no projected senior weight yet (counted as average)';
     case 'parentsPlacementIndex':
-      if (value === null) return 'parents without show results (counted as average)';
+      if (value === null) return 'parents without show results in classes of more than 3 (counted as average)';
       return `parents' offspring place ${value >= 1.05 ? 'above' : value <= 0.95 ? 'below' : 'about as'} chance (index ${value.toFixed(2)})`;
     case 'inbreeding':
       if (value === null) return 'inbreeding unknown (counted as average)';
@@ -55,13 +55,15 @@ export function componentWords(part: Contribution, c: KeeperCandidate, trait: Tr
 }
 
 /**
- * Why a junior stands where it does: its rank, the three components that moved it most (largest
- * |weight × z| first) and any disqualification risk, e.g. "Ranked 3rd of 12: strong breeding value
- * for weight at 12 weeks; projected senior weight 6 lb 2 oz, 3 % under the ideal; parents'
- * offspring place above chance (index 1.40)." O(k log k) for k components.
+ * Why a junior stands where it does, as sentences a breeder reads: its rank, the three
+ * components that moved it most (largest |weight × z| first), those counted as average for
+ * want of records, then each disqualification risk — e.g. "Ranked 3rd of 12: strong breeding
+ * value for weight at 12 weeks; projected senior weight 6 lb 2 oz, 3 % under the ideal;
+ * parents' offspring place above chance (index 1.40)." Weights in the reader's unit. O(k log k)
+ * for k components.
  */
-export function explainKeeper(c: KeeperCandidate, all: readonly KeeperCandidate[], trait: TraitInfo, unit: UnitSetting): string {
-  const tied = all.some((o) => o !== c && o.rank === c.rank);
+export function explainKeeper(c: KeeperCandidate, all: readonly Pick<KeeperCandidate, 'rank'>[], trait: TraitInfo, unit: UnitSetting): string[] {
+  const tied = all.filter((o) => o.rank === c.rank).length > 1;
   const head = `Ranked ${ordinal(c.rank)}${tied ? ' (tied)' : ''} of ${all.length}`;
   const moved = c.components
     .filter((p) => p.contribution !== 0)
@@ -69,8 +71,7 @@ export function explainKeeper(c: KeeperCandidate, all: readonly KeeperCandidate[
     .slice(0, 3);
   const parts = moved.map((p) => componentWords(p, c, trait, unit));
   const missing = c.components.filter((p) => p.value === null && p.weight !== 0).map((p) => componentWords(p, c, trait, unit));
-  const risks = c.weightFlags.filter((f) => f.disqualificationRisk).map((f) => f.message);
   const said = [...parts, ...missing.filter((m) => !parts.includes(m))];
   const body = said.length ? `: ${said.join('; ')}.` : ': every weighted component is at the average of these juniors.';
-  return [head + body, ...risks].join(' ');
+  return [head + body, ...c.weightFlags.filter((f) => f.disqualificationRisk).map((f) => f.message)];
 }
