@@ -61,6 +61,25 @@ describe('fitGrowthReference', () => {
     expect(reference.bands[0].fallback).toBeNull();
   });
 
+  it('takes bands of unequal width: the same answer as bandDays for equal edges, the truth recovered for wide ones', () => {
+    const points = simulate(60, 12, 6);
+    const weekly = fitGrowthReference(points, { toDays: 84 });
+    const edged = fitGrowthReference(points, { edges: Array.from({ length: 13 }, (_, i) => 7 * i) });
+    expect(edged).toEqual(weekly);
+    // Weekly to 4 weeks, then 4-week bands: each wide band's centiles still within 3 % of the truth at its mean age.
+    const wide = fitGrowthReference(simulate(300, 12, 7), { edges: [0, 7, 14, 21, 28, 56, 84] });
+    expect(wide.bands.map((b) => [b.fromDays, b.toDays])).toEqual([[0, 7], [7, 14], [14, 21], [21, 28], [28, 56], [56, 84]]);
+    for (const band of wide.bands.slice(4)) {
+      expect(band.n).toBe(1200);
+      for (const p of GROWTH_CENTILES) {
+        const ratio = band.centiles![p] / lmsValue(normalQuantile(p / 100), truth(band.midDays));
+        expect(ratio).toBeGreaterThan(0.97);
+        expect(ratio).toBeLessThan(1.03);
+      }
+    }
+    expect(() => fitGrowthReference(points, { edges: [0, 7, 7] })).toThrow('fitGrowthReference requires at least 2 ascending, finite band edges');
+  });
+
   it('leaves out weighings outside the range, with a warning', () => {
     const reference = fitGrowthReference([...simulate(30, 1, 4), { ageDays: 400, grams: 3000 }], { toDays: 7 });
     expect(reference.warnings).toEqual(['1 weighings outside 0–7 days were left out']);

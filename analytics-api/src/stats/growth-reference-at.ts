@@ -1,4 +1,5 @@
 import type { GrowthReference } from './growth-reference';
+import { lastIndexAtOrBelow } from './last-index-at-or-below';
 import type { Lms } from './lms';
 
 export type GrowthReferencePoint =
@@ -9,15 +10,16 @@ export type GrowthReferencePoint =
  * The reference at one age: in an LMS band, L, M and S interpolated linearly in age between
  * this band's mean age and the neighbouring LMS band's on the side of `ageDays` (the band's
  * own values at the ends or next to an empirical band); in an empirical band, its weights.
- * n is the band's number of weights. O(1).
+ * n is the band's number of weights. O(log B) for B bands.
  *
  * @returns null outside the reference's ages or in a band without weights
  */
 export function growthReferenceAt(reference: GrowthReference, ageDays: number): GrowthReferencePoint | null {
-  const { bands, fromDays, bandDays } = reference;
-  const b = Math.floor((ageDays - fromDays) / bandDays);
-  if (!(b >= 0 && b < bands.length)) return null;
-  const band = bands[b];
+  const { bands } = reference;
+  if (!(ageDays >= reference.fromDays && ageDays < reference.toDays)) return null;
+  // Bands are contiguous: the last one starting at or before the age holds it.
+  const b = lastIndexAtOrBelow(bands.length, (i) => bands[i]!.fromDays, ageDays);
+  const band = bands[b]!;
   if (band.weights !== null) return { method: 'empirical', weights: band.weights, n: band.n };
   if (band.lms === null) return null;
   const neighbour = bands[ageDays < band.midDays ? b - 1 : b + 1];

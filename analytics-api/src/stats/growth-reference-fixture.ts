@@ -10,7 +10,6 @@ export function handReference(bands: ({ lms: Lms; n: number; midDays?: number } 
   return {
     fromDays: 0,
     toDays: 7 * bands.length,
-    bandDays: 7,
     warnings: [],
     bands: bands.map((spec, b): GrowthBand => {
       const base = { fromDays: 7 * b, toDays: 7 * b + 7, midDays: 7 * b + 3.5, raw: null, centiles: null };

@@ -25,7 +25,7 @@ export interface GrowthBand {
 export interface GrowthReference {
   fromDays: number;
   toDays: number;
-  bandDays: number;
+  /** contiguous, youngest first; widths may differ */
   bands: GrowthBand[];
   warnings: string[];
 }

@@ -19,6 +19,17 @@ describe('localLinearSmooth', () => {
     expect(error(smooth)).toBeLessThan(0.6 * error(noisy));
   });
 
+  it('takes one bandwidth per point: a line still passes unchanged, and each point reaches only its own neighbours', () => {
+    const x = [0, 7, 14, 42, 70];
+    const line = x.map((v) => 3 + 0.5 * v);
+    expect(localLinearSmooth(x, line, [1, 1, 1, 1, 1], [14, 14, 14, 56, 56]).map((v) => Math.round(v * 1e9) / 1e9)).toEqual(line);
+    // With a reach of 1 day every point is alone; one of 100 days mixes the same values.
+    const bumpy = [1, 5, 1, 5, 1];
+    expect(localLinearSmooth(x, bumpy, [1, 1, 1, 1, 1], [1, 1, 1, 1, 1])).toEqual(bumpy);
+    expect(localLinearSmooth(x, bumpy, [1, 1, 1, 1, 1], [1, 1, 100, 1, 1])[2]).not.toBe(1);
+    expect(() => localLinearSmooth(x, bumpy, [1, 1, 1, 1, 1], [1, 1])).toThrow('localLinearSmooth requires one bandwidth per point');
+  });
+
   it('leaves an isolated point as it is', () => {
     expect(localLinearSmooth([0, 100], [1, 5], [1, 1], 10)).toEqual([1, 5]);
   });
