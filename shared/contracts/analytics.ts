@@ -227,6 +227,11 @@ export const GrowthReferenceReport = z.object({
   sex: sexSchema,
   weighings: int,
   animals: int,
+  /** The reference's last age (end of its last band), in days: weekly bands to 26 weeks, wider ones beyond as far as the weighings fill them. */
+  reachesDays: int,
+  /** Where the weighings became too few for another band (null when they fill every band to two years), and how many lay beyond. */
+  thinsOutFromDays: int.nullable(),
+  weighingsBeyond: int,
   bands: z.array(z.object({
     fromDays: int, toDays: int, midDays: z.number(), n: int,
     /** lms: fitted and smoothed; empirical: too few weights, sample centiles; null: no weights */
@@ -279,7 +284,10 @@ export type GrowthAnimal = z.infer<typeof GrowthAnimal>;
 export const GrowthReport = z.object({
   ...reportBase,
   centiles: z.array(int),
-  /** Age of the projected senior weight (8 months: every breed shows as a senior by then). */
+  /**
+   * Age the senior weight is projected at (12 months) where the reference reaches it; each
+   * projection gives its own age (the reference's oldest, when it stops earlier).
+   */
   seniorAgeDays: int,
   references: z.array(GrowthReferenceReport),
   animals: z.array(GrowthAnimal),

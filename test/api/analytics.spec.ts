@@ -170,7 +170,26 @@ describe('analytics on the demo season', () => {
         expect(v).toEqual([...v].sort((x, y) => x - y));
       }
       expect(ref.seniorLimits?.maxGrams).toBeGreaterThan(0);
+      // Weekly to 26 weeks, then bands of 4 weeks or more with at least 20 weights, past the senior class age.
+      expect(ref.bands.filter((x) => x.toDays <= 182).every((x) => x.toDays - x.fromDays === 7)).toBe(true);
+      const adult = ref.bands.filter((x) => x.fromDays >= 182);
+      expect(adult.length).toBeGreaterThan(0);
+      for (const x of adult) {
+        expect(x.toDays - x.fromDays).toBeGreaterThanOrEqual(28);
+        expect(x.n).toBeGreaterThanOrEqual(20);
+      }
+      expect(ref.reachesDays).toBe(ref.bands.at(-1)!.toDays);
+      expect(ref.reachesDays).toBeGreaterThan(243);
+      if (ref.thinsOutFromDays !== null) {
+        expect(ref.thinsOutFromDays).toBe(ref.reachesDays);
+        expect(ref.warnings.join(' ')).toMatch(/Weighings thin out after \d+ weeks/);
+      }
+      // An adult's median weight lies within the breed's senior limits (demo breeds are simulated inside them).
+      const oldest = adult.at(-1)!.centiles!.p50;
+      expect(oldest).toBeGreaterThan(ref.seniorLimits!.minGrams ?? 0);
+      expect(oldest).toBeLessThan(ref.seniorLimits!.maxGrams! * 1.1);
     }
+    expect(r.seniorAgeDays).toBe(365);
     for (const x of r.animals) {
       expect(x.weighings.length).toBeGreaterThanOrEqual(8);
       for (const w of x.weighings.filter((v) => v.percentile !== null)) {
@@ -178,6 +197,8 @@ describe('analytics on the demo season', () => {
         expect(w.percentile).toBeLessThan(100);
       }
       expect(x.projection).not.toBeNull();
+      const ref = r.references.find((v) => v.sex === x.animal.sex)!;
+      expect(x.projection!.ageDays).toBe(Math.min(365, ref.reachesDays - 1));
       expect(x.projection!.lower!).toBeLessThanOrEqual(x.projection!.grams);
       expect(x.projection!.upper!).toBeGreaterThanOrEqual(x.projection!.grams);
       expect(x.projection!.check!.disqualificationRisk).toBe(x.projection!.check!.status === 'over-maximum' || x.projection!.check!.status === 'under-minimum');

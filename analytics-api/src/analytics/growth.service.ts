@@ -1,7 +1,9 @@
 import { type GrowthAnimal, type GrowthQuery, type GrowthReferenceReport, type GrowthReport, type SeniorProjection } from '@shared/contracts/analytics';
 import { checkWeightAgainstLimits } from '@shared/domain/weight-check';
-import type { Sex } from '@shared/domain/terms';
+import type { ClassScheme, Sex } from '@shared/domain/terms';
+import { INTERMEDIATE_UNTIL_MONTHS, JUNIOR_UNTIL_MONTHS } from '@shared/domain/age-class';
 import { fitGrowthReference } from '../stats/fit-growth-reference';
+import { growthBandEdges } from '../stats/growth-band-edges';
 import { GROWTH_CENTILES, type GrowthReference } from '../stats/growth-reference';
 import { percentileOfWeighing } from '../stats/percentile-of-weighing';
 import { projectSeniorWeight } from '../stats/project-senior-weight';
@@ -10,12 +12,37 @@ import { type HerdContext, sentence } from './analytics-context';
 import type { AnimalRow } from './analytics.repository';
 import { animalRef, type HerdData, herdAnimals, limitsOf } from './herd-data';
 
-/** Projected senior weight is read at 8 months (243 days): every breed shows as a senior by then. */
-export const SENIOR_AGE_DAYS = 243;
-/** The reference runs from birth to 36 weeks in weekly bands (the projection age lies inside). */
-const REFERENCE_OPTIONS = { bandDays: 7, fromDays: 0, toDays: 252 } as const;
+/**
+ * The senior weight is projected at 12 months, when the reference reaches it: exhibition breeds
+ * are near their adult weight by then and show as seniors well before (common practice, no
+ * source). A reference that stops earlier gives the projection at its oldest age, if that is
+ * at least the breed's senior class age.
+ */
+export const SENIOR_AGE_DAYS = 365;
+const DAYS_PER_MONTH = 365.25 / 12;
+/** Bands weekly to 26 weeks, then joined 4-week blocks of at least 20 weighings, up to two years. */
+const BAND_OPTIONS = { fineDays: 7, fineUntilDays: 182, blockDays: 28, minBandSize: 20, maxBandDays: 112, untilDays: 728 } as const;
 
-export interface FittedReference { reference: GrowthReference | null; weighings: number; animals: number; warnings: string[] }
+export interface FittedReference {
+  reference: GrowthReference | null;
+  weighings: number;
+  animals: number;
+  /** Where the weighings became too few for another band (null when they reach two years), and how many were left beyond. */
+  thinsOutFromDays: number | null;
+  beyond: number;
+  warnings: string[];
+}
+
+const weeks = (days: number) => Math.round(days / 7);
+
+/** The age a senior weight is projected at from a reference: 12 months, or its oldest age if at least the senior class age; else null. */
+export function projectionAgeDays(reference: GrowthReference, classScheme: ClassScheme): number | null {
+  const lastWithWeights = [...reference.bands].reverse().find((b) => b.n > 0);
+  if (!lastWithWeights) return null;
+  const seniorFrom = Math.ceil((classScheme === 'six-class' ? INTERMEDIATE_UNTIL_MONTHS : JUNIOR_UNTIL_MONTHS) * DAYS_PER_MONTH);
+  const age = Math.min(SENIOR_AGE_DAYS, lastWithWeights.toDays - 1);
+  return age >= seniorFrom ? age : null;
+}
 
 /**
  * LMS weight-for-age reference of one breed and sex from every weighing in the scope
@@ -23,22 +50,31 @@ export interface FittedReference { reference: GrowthReference | null; weighings:
  */
 export function growthReferenceOf(entry: CacheEntry<HerdData>, breedId: number, sex: Sex): FittedReference {
   return entry.memo(`growth:${breedId}:${sex}`, () => {
-    const points: { ageDays: number; grams: number }[] = [];
+    const all: { ageDays: number; grams: number }[] = [];
     let animals = 0;
     for (const a of entry.data.animals) {
       if (a.breedId !== breedId || a.sex !== sex) continue;
       const series = entry.data.series.get(a.id);
       if (!series?.length) continue;
       animals++;
-      for (const w of series) if (w.ageDays < REFERENCE_OPTIONS.toDays) points.push({ ageDays: w.ageDays, grams: w.grams });
+      for (const w of series) all.push({ ageDays: w.ageDays, grams: w.grams });
     }
-    if (points.length === 0) return { reference: null, weighings: 0, animals, warnings: ['No weighings of this breed and sex in the scope: no growth reference.'] };
-    const reference = fitGrowthReference(points, REFERENCE_OPTIONS);
+    const none = { reference: null, weighings: 0, animals, thinsOutFromDays: null, beyond: 0 };
+    if (all.length === 0) return { ...none, warnings: ['No weighings of this breed and sex in the scope: no growth reference.'] };
+    const { edges, thinsOutFromDays, beyond } = growthBandEdges(all.map((p) => p.ageDays), BAND_OPTIONS);
+    const end = edges[edges.length - 1]!;
+    const points = all.filter((p) => p.ageDays < end);
+    if (points.length === 0) return { ...none, beyond, warnings: ['Every weighing of this breed and sex is of an adult, too few for a growth reference.'] };
+    const reference = fitGrowthReference(points, { edges });
     const empirical = reference.bands.filter((b) => b.fallback === 'empirical').length;
     const warnings: string[] = [];
-    if (empirical > 0) warnings.push(`${empirical} of ${reference.bands.length} weekly age bands have fewer than 20 weights: their centiles are the sample's own, not a fitted curve.`);
+    if (empirical > 0) warnings.push(`${empirical} of ${reference.bands.length} age bands have fewer than 20 weights: their centiles are the sample's own, not a fitted curve.`);
+    if (thinsOutFromDays !== null) {
+      warnings.push(`Weighings thin out after ${weeks(thinsOutFromDays)} weeks (about ${Math.round(thinsOutFromDays / DAYS_PER_MONTH)} months): the reference stops there`
+        + (beyond > 0 ? `; ${beyond} later weighing${beyond === 1 ? ' is' : 's are'} too few for centiles.` : '.'));
+    }
     if (animals < 30) warnings.push(`Only ${animals} animals of this breed and sex are weighed: the bands are a rough guide (want 30 or more).`);
-    return { reference, weighings: points.length, animals, warnings };
+    return { reference, weighings: points.length, animals, thinsOutFromDays, beyond, warnings };
   });
 }
 
@@ -49,6 +85,9 @@ function referenceReport(data: HerdData, fitted: FittedReference, breedId: numbe
     sex,
     weighings: fitted.weighings,
     animals: fitted.animals,
+    reachesDays: fitted.reference?.toDays ?? 0,
+    thinsOutFromDays: fitted.thinsOutFromDays,
+    weighingsBeyond: fitted.beyond,
     bands: (fitted.reference?.bands ?? []).map((b) => ({
       fromDays: b.fromDays, toDays: b.toDays, midDays: b.midDays, n: b.n,
       method: b.lms ? 'lms' : b.weights ? 'empirical' : null,
@@ -68,13 +107,16 @@ function referenceReport(data: HerdData, fitted: FittedReference, breedId: numbe
 export function seniorProjection(data: HerdData, reference: GrowthReference | null, a: AnimalRow): { projection: SeniorProjection | null; warnings: string[] } {
   const series = data.series.get(a.id) ?? [];
   if (!reference || series.length === 0) return { projection: null, warnings: [] };
-  const p = projectSeniorWeight(reference, series, SENIOR_AGE_DAYS);
+  const scheme = a.breedId === null ? 'four-class' : (data.breeds.get(a.breedId)?.classScheme ?? 'four-class');
+  const ageDays = projectionAgeDays(reference, scheme);
+  if (ageDays === null) return { projection: null, warnings: ['The weighings of its breed and sex do not reach the senior class age: no projection.'] };
+  const p = projectSeniorWeight(reference, series, ageDays);
   if (p === null) return { projection: null, warnings: ['No weighing falls within the reference ages: no projection.'] };
   const limits = limitsOf(data, a.breedId, a.sex, 'senior');
   const check = limits ? checkWeightAgainstLimits(Math.max(1, Math.round(p.grams)), limits) : null;
   return {
     projection: {
-      ageDays: SENIOR_AGE_DAYS, grams: p.grams, lower: p.lower, upper: p.upper, percentile: p.percentile, z: p.z, weighingsUsed: p.weighingsUsed,
+      ageDays, grams: p.grams, lower: p.lower, upper: p.upper, percentile: p.percentile, z: p.z, weighingsUsed: p.weighingsUsed,
       check,
       upperOverMaximum: limits?.maxGrams != null && p.upper !== null && p.upper > limits.maxGrams,
     },

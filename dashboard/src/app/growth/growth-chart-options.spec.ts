@@ -1,5 +1,5 @@
 import { DEFAULT_CHART_THEME } from '../keepers/chart-theme';
-import { buildGrowthOptions, centileText, weeksOf } from './growth-chart-options';
+import { buildGrowthOptions, centileText, growthChartWeeks, monthsText, weeksOf } from './growth-chart-options';
 import { growthAnimal, reference } from './growth-fixtures';
 
 type Series = { type: string; name: string; stack?: string; data: unknown[]; markLine?: { data: { yAxis?: number; xAxis?: number; name: string }[] } };
@@ -29,6 +29,20 @@ describe('buildGrowthOptions', () => {
     expect(median.markLine?.data.map((d) => d.yAxis ?? d.xAxis)).toEqual([4.5, 4.251, 34.7]);
     expect((o['yAxis'] as { name: string }).name).toBe('Weight (lb)');
     expect((o['xAxis'] as { name: string; max: number })).toMatchObject({ name: 'Age (weeks)', max: 36 });
+  });
+
+  it('runs as far as the reference reaches, and marks the age the senior weight is projected at', () => {
+    const far = { ...reference('doe'), reachesDays: 420 };
+    const adult = growthAnimal(1, 'BF177', { projection: { ...growthAnimal(1, 'BF177').projection!, ageDays: 365 } });
+    const o = buildGrowthOptions({ reference: far, animals: [adult], seniorAgeDays: 365, unit: 'kg', theme });
+    expect(growthChartWeeks(far)).toBe(60);
+    expect(growthChartWeeks(null)).toBe(36);
+    expect((o['xAxis'] as { max: number }).max).toBe(60);
+    const median = (o['series'] as Series[]).find((s) => s.name === 'Median (50th)')!;
+    expect(median.markLine?.data.at(-1)).toMatchObject({ name: '12 months', xAxis: 52.1 });
+    // The adult weighing at 287 days (41 weeks) is on the chart now.
+    expect(((o['series'] as Series[]).find((s) => s.name === 'BF177')!.data as unknown[])).toHaveLength(3);
+    expect([183, 243, 365, 548].map(monthsText)).toEqual(['6 months', '8 months', '12 months', '18 months']);
   });
 
   it('puts each chosen animal’s weighings on top, leaving later ones to the table', () => {

@@ -12,11 +12,20 @@ export interface GrowthChartInput {
   seniorAgeDays: number;
   unit: UnitSetting;
   theme: ChartTheme;
-  /** The x axis ends here; later weighings are in the table only. */
+  /** The x axis ends here (default: growthChartWeeks of the reference); later weighings are in the table only. */
   maxWeeks?: number;
 }
 
+/** The chart spans at least this many weeks, and further where the reference reaches. */
 export const GROWTH_MAX_WEEKS = 36;
+
+/** Weeks the chart spans: to where the reference reaches (senior ages included), at least 36. */
+export function growthChartWeeks(reference: GrowthReferenceReport | null): number {
+  return Math.max(GROWTH_MAX_WEEKS, Math.ceil((reference?.reachesDays ?? 0) / 7));
+}
+
+/** An age in whole months: 365 → "12 months", 243 → "8 months". */
+export const monthsText = (days: number) => `${Math.round(days / (365.25 / 12))} months`;
 const BAND_HUE = 4;
 
 export const weeksOf = (days: number) => Math.round((days / 7) * 10) / 10;
@@ -50,7 +59,7 @@ export function animalHue(theme: ChartTheme, i: number): string {
  * as a whisker (side by side when several animals are projected). Weights in the user's unit
  * (pounds or kilograms on the axis, lb-oz or kg in tooltips). O(bands + weighings).
  */
-export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, theme, maxWeeks = GROWTH_MAX_WEEKS }: GrowthChartInput): EChartsCoreOption {
+export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, theme, maxWeeks = growthChartWeeks(reference) }: GrowthChartInput): EChartsCoreOption {
   const y = (grams: number) => axisValue(grams, unit);
   const bands = (reference?.bands ?? []).filter((b) => weeksOf(b.midDays) <= maxWeeks);
   const at = (key: (typeof BAND_STEPS)[number][0]) => bands.map((b) => (b.centiles ? [weeksOf(b.midDays), y(b.centiles[key])] : [weeksOf(b.midDays), '-']));
@@ -62,8 +71,10 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
   // young end where the bands are far below them and no projection sits.
   const limitLine = (grams: number | null | undefined, label: string, color: string, position: string) =>
     grams ? [{ yAxis: y(grams), name: `${label} ${formatWeight(grams, unit)}`, lineStyle: { color, type: 'dashed', width: 1.5 }, label: { color, position } }] : [];
-  const seniorWeeks = weeksOf(seniorAgeDays);
   const projected = animals.map((a, i) => ({ a, i })).filter(({ a }) => a.projection !== null);
+  // A reference that stops before 12 months projects at its oldest age: the marker goes there.
+  const projectedAt = projected[0]?.a.projection?.ageDays ?? seniorAgeDays;
+  const seniorWeeks = weeksOf(projectedAt);
   const offset = (j: number) => Math.round((seniorWeeks + (j - (projected.length - 1) / 2) * 0.35) * 100) / 100;
   const unitName = unit === 'kg' ? 'kg' : 'lb';
   const refName = reference ? `${reference.breed.name} ${reference.sex === 'buck' ? 'bucks' : 'does'}` : 'no reference';
@@ -87,7 +98,7 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
             data: [
               ...limitLine(limits?.maxGrams, 'Senior maximum', theme.risk, 'insideStartTop'),
               ...limitLine(limits?.idealGrams, 'Senior ideal', theme.reference, 'insideStartBottom'),
-              { xAxis: seniorWeeks, name: '8 months', lineStyle: { color: theme.grid, type: 'dotted' }, label: { color: theme.muted, position: 'insideStartTop' } },
+              { xAxis: seniorWeeks, name: monthsText(projectedAt), lineStyle: { color: theme.grid, type: 'dotted' }, label: { color: theme.muted, position: 'insideStartTop' } },
             ],
           },
         },
@@ -128,7 +139,7 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
     if (d.projection) {
       const pr = d.projection;
       const range = pr.lower !== null && pr.upper !== null ? ` (95 %: ${formatWeight(pr.lower, unit)} – ${formatWeight(pr.upper, unit)})` : '';
-      return `<b>${d.earId}</b>: projected ${formatWeight(pr.grams, unit)} at 8 months${range}<br>${centileText(pr.percentile)}`;
+      return `<b>${d.earId}</b>: projected ${formatWeight(pr.grams, unit)} at ${monthsText(pr.ageDays)}${range}<br>${centileText(pr.percentile)}`;
     }
     if (d.grams !== undefined) return `<b>${d.earId}</b> · ${d.weighedOn}<br>${d.value[0]} weeks · ${formatWeight(d.grams, unit)}<br>${centileText(d.percentile ?? null)}`;
     return '';

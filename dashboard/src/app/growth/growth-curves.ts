@@ -29,7 +29,7 @@ import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
 import { LoadError } from '../status/load-error';
 import { GrowthApi } from './growth-api';
-import { GROWTH_MAX_WEEKS, buildGrowthOptions } from './growth-chart-options';
+import { buildGrowthOptions, growthChartWeeks } from './growth-chart-options';
 import {
   ageText, bandCsvColumns, centileKeys, centileLabel, centileText, projectionText, sortWeighings, weighingCsvColumns, weighingRows, type WeighingSortKey,
 } from './growth-table';
@@ -88,18 +88,20 @@ export class GrowthCurves {
   protected readonly options = computed(() => {
     const r = this.shown();
     return buildGrowthOptions({
-      reference: this.reference(), animals: this.animals(), seniorAgeDays: r?.seniorAgeDays ?? 243, unit: this.unit(),
+      reference: this.reference(), animals: this.animals(), seniorAgeDays: r?.seniorAgeDays ?? 365, unit: this.unit(), maxWeeks: this.maxWeeks(),
       theme: (this.theme ??= readChartTheme(this.host)),
     });
   });
-  protected readonly laterWeighings = computed(() => this.animals().reduce((n, a) => n + a.weighings.filter((w) => w.ageDays > GROWTH_MAX_WEEKS * 7).length, 0));
+  /** The chart runs as far as the reference reaches (at least 36 weeks). */
+  protected readonly maxWeeks = computed(() => growthChartWeeks(this.reference()));
+  protected readonly laterWeighings = computed(() => this.animals().reduce((n, a) => n + a.weighings.filter((w) => w.ageDays > this.maxWeeks() * 7).length, 0));
 
   private readonly sort = signal<Sort>({ active: 'earId', direction: '' });
   private readonly allWeighings = computed(() => sortWeighings(weighingRows(this.animals()), this.sort().active as WeighingSortKey, this.sort().direction as SortDirection));
   /** Adult weighings of an old animal would bury the growing ones: they wait behind a button (the CSV has all). */
   protected readonly showLater = signal(false);
   protected readonly weighings = computed(() =>
-    this.showLater() ? this.allWeighings() : this.allWeighings().filter((w) => w.ageDays <= GROWTH_MAX_WEEKS * 7),
+    this.showLater() ? this.allWeighings() : this.allWeighings().filter((w) => w.ageDays <= this.maxWeeks() * 7),
   );
   protected readonly isPhone = toSignal(inject(BreakpointObserver).observe('(max-width: 600px)').pipe(map((s) => s.matches)), { initialValue: false });
   protected readonly showFilters = signal(false);
@@ -107,7 +109,6 @@ export class GrowthCurves {
   protected readonly bandColumns = ['weeks', 'n', ...centileKeys];
   protected readonly shownBands = computed(() => (this.reference()?.bands ?? []).filter((b) => b.centiles !== null));
 
-  protected readonly maxWeeks = GROWTH_MAX_WEEKS;
   protected readonly maxChosen = MAX_CHOSEN;
   protected readonly centileKeys = centileKeys;
   protected readonly centileLabel = centileLabel;

@@ -7,6 +7,9 @@ export function reference(sex: 'buck' | 'doe' = 'doe', breedId = 1): GrowthRefer
     sex,
     weighings: 1074,
     animals: 95,
+    reachesDays: 252,
+    thinsOutFromDays: 252,
+    weighingsBeyond: 2,
     bands: [
       { fromDays: 56, toDays: 63, midDays: 59.5, n: 67, method: 'lms', lms: { L: 0.45, M: 808, S: 0.09 }, centiles: { p3: 680, p10: 720, p25: 760, p50: 808, p75: 860, p90: 907, p97: 956 } },
       { fromDays: 63, toDays: 70, midDays: 66.5, n: 0, method: null, lms: null, centiles: null },

@@ -3,7 +3,7 @@ import type { CsvColumn } from '@shared/csv/to-csv';
 import { ordinal } from '@shared/domain/ordinal';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import { sortRows, type SortDirection } from '../keepers/sort-rows';
-import { centileText } from './growth-chart-options';
+import { centileText, monthsText } from './growth-chart-options';
 
 /** One weighing of a chosen animal, as the table lists it. */
 export interface WeighingRow {
@@ -43,7 +43,7 @@ export function projectionText(a: GrowthAnimal, unit: UnitSetting): string {
   const p = a.projection;
   if (!p) return '—';
   const w = (g: number) => formatWeight(Math.max(0, g), unit);
-  return p.lower !== null && p.upper !== null ? `${w(p.grams)} (${w(p.lower)} – ${w(p.upper)})` : w(p.grams);
+  return `${p.lower !== null && p.upper !== null ? `${w(p.grams)} (${w(p.lower)} – ${w(p.upper)})` : w(p.grams)} at ${monthsText(p.ageDays)}`;
 }
 
 export function weighingCsvColumns(unit: UnitSetting): CsvColumn<WeighingRow>[] {
