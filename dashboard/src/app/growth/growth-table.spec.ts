@@ -13,7 +13,7 @@ describe('growth tables and choices', () => {
   it('says ages in weeks and days, and projections with their interval', () => {
     expect([3, 7, 8, 84, 86].map(ageText)).toEqual(['3 days', '1 week', '1 week 1 day', '12 weeks', '12 weeks 2 days']);
     // 1900 g = 4 lb 3 oz, 1800 g = 3 lb 15 oz, 2000 g = 4 lb 7 oz (1 oz = 28.349523125 g)
-    expect(projectionText(growthAnimal(1, 'BF177'), 'lb-oz')).toBe('4 lb 3 oz (3 lb 15 oz – 4 lb 7 oz)');
+    expect(projectionText(growthAnimal(1, 'BF177'), 'lb-oz')).toBe('4 lb 3 oz (3 lb 15 oz – 4 lb 7 oz) at 8 months');
     expect(projectionText(growthAnimal(1, 'BF177', { projection: null }), 'kg')).toBe('—');
   });
 

@@ -3,6 +3,7 @@ import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
@@ -32,6 +33,7 @@ import { sortRows, type RowOrder } from './sort-rows';
     MatButtonModule,
     MatButtonToggleModule,
     MatFormFieldModule,
+    MatInputModule,
     MatProgressBarModule,
     MatSelectModule,
     MatSortModule,
