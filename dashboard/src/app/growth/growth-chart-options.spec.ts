@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from '../keepers/chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildGrowthOptions, centileText, weeksOf } from './growth-chart-options';
 import { growthAnimal, reference } from './growth-fixtures';
 

@@ -2,8 +2,8 @@ import type { EChartsCoreOption } from 'echarts/core';
 import type { GrowthAnimal, GrowthReferenceReport } from '@shared/contracts/analytics';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import { axisValue } from '../animal/weight-chart-options';
-import { axisStyle, chartBase, type ChartTheme } from '../keepers/chart-theme';
-import { intervalLegend, intervalSeries } from '../keepers/interval-series';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
+import { intervalLegend, intervalSeries } from '../panels/interval-series';
 import { ordinal } from '../shows/result-words';
 
 export interface GrowthChartInput {
@@ -138,7 +138,7 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
     ...chartBase(theme, `Growth centile bands of ${refName} by week of age${animals.length ? `, with ${animals.length} chosen animal${animals.length === 1 ? '' : 's'}` : ''}.`),
     legend: {
       type: 'scroll', top: 0, left: 0, selectedMode: false,
-      textStyle: { color: theme.text, fontFamily: theme.font },
+      ...legendStyle(theme),
       data: [
         ...(reference ? [...['25th–75th centile', '10th–90th centile', '3rd–97th centile'].map((name) => ({ name, icon: 'rect' })), 'Median (50th)'] : []),
         ...animals.map((a) => a.animal.earId),
@@ -146,7 +146,7 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
       ],
     },
     grid: { left: 16, right: 24, top: 48, bottom: 52 },
-    tooltip: { trigger: 'item', confine: true, textStyle: { fontFamily: theme.font }, formatter: tooltip },
+    tooltip: { trigger: 'item', ...tooltipStyle(theme), formatter: tooltip },
     xAxis: { type: 'value', min: 0, max: maxWeeks, name: 'Age (weeks)', nameLocation: 'middle', nameGap: 30, ...axisStyle(theme) },
     yAxis: { type: 'value', min: 0, name: `Weight (${unitName})`, nameLocation: 'middle', nameGap: 40, ...axisStyle(theme) },
     series: [...bandSeries, ...animalSeries, ...projectionSeries],

@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from './chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildKeeperBoardOptions, keeperChartHeight, keeperRowLabel } from './keeper-chart-options';
 import { candidate } from './keeper-fixtures';
 
