@@ -5,9 +5,9 @@ import { By } from '@angular/platform-browser';
 import { provideRouter, Router } from '@angular/router';
 import type { LinesReport } from '@shared/contracts/analytics';
 import { signInAs, userWith } from '../session/test-users';
-import { stubChartEnvironment } from './chart-stubs';
+import { stubChartEnvironment } from '../panels/chart-stubs';
 import { LineComparison } from './line-comparison';
-import { PanelChart } from './panel-chart';
+import { PanelChart } from '../panels/panel-chart';
 
 const summary = (n: number, median: number) => ({ n, min: median - 40, q1: median - 20, median, q3: median + 20, max: median + 40, mean: median + 1 });
 const report: LinesReport = {
