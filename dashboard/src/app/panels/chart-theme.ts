@@ -27,16 +27,17 @@ const FONT = "'IBM Plex Sans', sans-serif";
 /**
  * Eight categorical hues in the manner of Okabe & Ito (2008, "Color Universal Design"): they
  * differ in lightness as well as hue, so neighbours stay apart under protan, deutan and tritan
- * vision. The dark scheme's set is lighter, to hold its contrast against a dark surface.
+ * vision, and each keeps 3:1 against its scheme's surface (WCAG 1.4.11). The dark scheme's set is
+ * lighter, to hold that contrast against a dark surface.
  */
 export const SERIES_HUES: readonly string[] = [
   '#1f6aa5', // lake blue
-  '#d98b19', // harvest orange
+  '#c07400', // harvest orange
   '#1c8f6e', // fern green
   '#c2528f', // heather
-  '#5fb0de', // sky
+  '#3a8dc0', // sky
   '#9d5a16', // chestnut
-  '#b9a21c', // mustard
+  '#948300', // mustard
   '#4a4a55', // slate
 ];
 export const DARK_SERIES_HUES: readonly string[] = ['#72b4ea', '#f0a848', '#4cc39e', '#e58cbd', '#a3d5f3', '#d6995a', '#ddc85a', '#b9b9c7'];

@@ -76,7 +76,7 @@ describe('buildEntriesOptions', () => {
   });
 
   it('lays patterns on the bars as well as hues, and totals a show in the tooltip', () => {
-    expect(build()['aria']).toEqual({ enabled: true, decal: { show: true } });
+    expect(build()['aria']).toMatchObject({ enabled: true, decal: { show: true } });
     const tooltip = build()['tooltip'] as { formatter: (p: unknown[]) => string };
     expect(tooltip.formatter([
       { dataIndex: 0, seriesName: 'Californian', value: 37, marker: '•' },
