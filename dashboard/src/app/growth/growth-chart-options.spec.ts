@@ -31,6 +31,15 @@ describe('buildGrowthOptions', () => {
     expect((o['xAxis'] as { name: string; max: number })).toMatchObject({ name: 'Age (weeks)', max: 36 });
   });
 
+  it('keeps the chosen animals’ lines off the bands’ hue, and shows every legend entry on a phone', () => {
+    const series = build('kg')['series'] as (Series & { lineStyle?: { color: string }; areaStyle?: { color: string } })[];
+    const bandHue = series.find((s) => s.areaStyle)!.areaStyle!.color;
+    expect(series.filter((s) => s.name.startsWith('BF')).map((s) => s.lineStyle!.color)).not.toContain(bandHue);
+    const phone = buildGrowthOptions({ reference: reference('doe'), animals: [growthAnimal(1, 'BF177')], seniorAgeDays: 243, unit: 'kg', theme, narrow: true });
+    expect(phone['legend']).toMatchObject({ type: 'plain' });
+    expect((phone['grid'] as { top: number }).top).toBeGreaterThan((build('kg')['grid'] as { top: number }).top);
+  });
+
   it('puts each chosen animal’s weighings on top, leaving later ones to the table', () => {
     const series = build('kg')['series'] as Series[];
     const bf177 = series.find((s) => s.name === 'BF177')!;

@@ -82,6 +82,7 @@ export class GrowthCurves {
     return buildGrowthOptions({
       reference: this.reference(), animals: this.animals(), seniorAgeDays: r?.seniorAgeDays ?? 243, unit: this.unit(),
       theme: this.theme(),
+      narrow: this.isPhone(),
     });
   });
   protected readonly laterWeighings = computed(() => this.animals().reduce((n, a) => n + a.weighings.filter((w) => w.ageDays > GROWTH_MAX_WEEKS * 7).length, 0));

@@ -9,6 +9,7 @@ import { MatSliderModule } from '@angular/material/slider';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
+import { NgTemplateOutlet } from '@angular/common';
 import { RouterLink } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
 import { Subject, debounceTime } from 'rxjs';
@@ -20,6 +21,7 @@ import { AnimalApi } from '../animal/animal-api';
 import { BreedsApi } from '../breeds/breeds-api';
 import { CautionsNote } from '../panels/cautions-note';
 import { injectChartTheme } from '../panels/chart-theme';
+import { PHONE_WIDTH, mediaMatches } from '../panels/media-query';
 import { PanelChart } from '../panels/panel-chart';
 import { lastValue, routedView } from '../panels/routed-view';
 import { sortRows, type RowOrder } from '../panels/sort-rows';
@@ -43,7 +45,7 @@ import { KeepersApi } from './keepers-api';
   styleUrl: './keeper-board.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
-    RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatProgressBarModule, MatSelectModule,
+    NgTemplateOutlet, RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatProgressBarModule, MatSelectModule,
     MatSliderModule, MatSortModule, MatTableModule, CautionsNote, LoadError, PanelChart,
   ],
   providers: [provideEchartsCore({ echarts: () => import('./keeper-echarts').then((m) => m.echarts) })],
@@ -103,9 +105,11 @@ export class KeeperBoard {
     const all = this.candidates();
     return new Map(all.map((c) => [c.animal.id, report ? explainKeeper(c, all, report.trait, this.unit()) : '']));
   });
+  protected readonly isPhone = mediaMatches(PHONE_WIDTH, false);
   protected readonly columns = computed(() => [
-    // The decision comes early: it is what the breeder came to do, and must not scroll out of view.
-    'rank', 'earId', 'total', 'decision', ...KEEPER_COMPONENTS.filter((c) => this.view().weights[c] !== 0), 'projected',
+    // The decision comes early: it is what the breeder came to do, and must not scroll out of view
+    // (on a phone it moves under each junior's sentence).
+    'rank', 'earId', 'total', ...(this.isPhone() ? [] : ['decision']), ...KEEPER_COMPONENTS.filter((c) => this.view().weights[c] !== 0), 'projected',
   ]);
 
   protected readonly componentValue = componentValue;

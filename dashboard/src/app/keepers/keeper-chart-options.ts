@@ -50,7 +50,7 @@ export function buildKeeperBoardOptions({ candidates, theme }: KeeperChartInput)
     },
     xAxis: {
       type: 'value',
-      name: 'Contribution to the index',
+      name: 'Contribution to the index (weight × SD)',
       nameLocation: 'middle',
       nameGap: 30,
       ...axisStyle(theme),

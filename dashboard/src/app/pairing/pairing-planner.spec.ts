@@ -86,8 +86,8 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     await fixture.whenStable();
     expect(el.querySelector('.summary')?.textContent?.replace(/\s+/g, ' ')).toContain('Planning for BF100 Lark (doe, Mini Rex, Ember line), breeding value −0.12 SD');
     expect(rows()).toEqual([
-      ['1', 'BF118Cobble II · Blue', 'Ember', '16 months', '2.3 %less than first cousins', '+0.23 SD', '+0.05 SD', 'Distant (under 1/32)'],
-      ['2', 'BF143Ivy II · Blue', 'Ember', '16 months', '30.5 %as close as full sibs or parent × offspring', '+0.32 SD', '+0.10 SD',
+      ['1', 'BF118Cobble II · Blue', '2.3 %less than first cousins', '+0.05 SD', '+0.23 SD', 'Ember', '16 months', 'Distant (under 1/32)'],
+      ['2', 'BF143Ivy II · Blue', '30.5 %as close as full sibs or parent × offspring', '+0.10 SD', '+0.32 SD', 'Ember', '16 months',
         'BF056 Aster 46 %, an unrecorded ancestor 21 % High expected inbreeding: as close as a half-sib mating or closer.'],
     ]);
     expect(el.querySelector('kl-cautions-note')?.textContent).toContain(BREEDING_CAUTIONS[0]);

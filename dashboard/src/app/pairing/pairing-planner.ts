@@ -90,7 +90,8 @@ export class PairingPlanner {
 
   protected readonly order = signal<RowOrder>({ active: 'rank', direction: 'asc' });
   protected readonly candidates = computed(() => sortRows(this.data()?.candidates ?? [], this.order(), CANDIDATE_SORT));
-  protected readonly columns = ['rank', 'mate', 'line', 'age', 'inbreeding', 'mateEbv', 'offspringEbv', 'ancestors'];
+  // The litter's inbreeding and value come right after the mate: on a phone they stay in view.
+  protected readonly columns = ['rank', 'mate', 'inbreeding', 'offspringEbv', 'mateEbv', 'line', 'age', 'ancestors'];
   protected readonly mateWord = computed(() => (this.planned()?.animal.sex === 'buck' ? 'does' : 'bucks'));
 
   private readonly theme = injectChartTheme();

@@ -35,12 +35,12 @@ export const SERIES_HUES: readonly string[] = [
   '#c07400', // harvest orange
   '#1c8f6e', // fern green
   '#c2528f', // heather
-  '#3a8dc0', // sky
-  '#9d5a16', // chestnut
+  '#d0492b', // rosehip
+  '#7f4a12', // chestnut
   '#948300', // mustard
   '#4a4a55', // slate
 ];
-export const DARK_SERIES_HUES: readonly string[] = ['#72b4ea', '#f0a848', '#4cc39e', '#e58cbd', '#a3d5f3', '#d6995a', '#ddc85a', '#b9b9c7'];
+export const DARK_SERIES_HUES: readonly string[] = ['#72b4ea', '#f0a848', '#4cc39e', '#e58cbd', '#f4937a', '#d6995a', '#ddc85a', '#b9b9c7'];
 
 /** The light theme, for specs and for anything drawn outside the page. */
 export const DEFAULT_CHART_THEME: ChartTheme = {

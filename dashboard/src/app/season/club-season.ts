@@ -125,7 +125,7 @@ export class ClubSeason {
   protected readonly dates = computed(() => this.data()?.cumulative.dates ?? []);
   protected readonly entriesOptions = computed(() => {
     const r = this.data();
-    return r && r.entries.shows.length > 0 ? buildEntriesOptions({ entries: r.entries, theme: this.themed() }) : null;
+    return r && r.entries.shows.length > 0 ? buildEntriesOptions({ entries: r.entries, theme: this.themed(), wide: this.wide() }) : null;
   });
 
   // ---- legs and sires

@@ -67,7 +67,7 @@ describe('buildEntriesOptions', () => {
     counts: [[37, 72], [41, 47]],
     byBreed: [{ breed: 'Californian', entries: 78 }, { breed: 'Mini Rex', entries: 119 }],
   };
-  const build = () => buildEntriesOptions({ entries, theme: DEFAULT_CHART_THEME });
+  const build = (wide = true) => buildEntriesOptions({ entries, theme: DEFAULT_CHART_THEME, wide });
 
   it('stacks one bar series per breed over the shows', () => {
     const series = build()['series'] as { name: string; stack: string; data: number[] }[];
@@ -82,6 +82,12 @@ describe('buildEntriesOptions', () => {
       { dataIndex: 0, seriesName: 'Californian', value: 37, marker: '•' },
       { dataIndex: 0, seriesName: 'Mini Rex', value: 72, marker: '•' },
     ])).toBe('<b>Winter Show</b> 2026-01-17<br>• Californian: 37<br>• Mini Rex: 72<br>Total: 109 entries');
+  });
+
+  it('pages the legend on a wide screen and shows every breed above the bars on a narrow one', () => {
+    expect(build()['legend']).toMatchObject({ type: 'scroll' });
+    expect(build(false)['legend']).toMatchObject({ type: 'plain' });
+    expect((build(false)['grid'] as { top: number }).top).toBeGreaterThanOrEqual(56);
   });
 
   it('draws as SVG with the breeds in the legend', () => {

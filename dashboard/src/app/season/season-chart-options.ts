@@ -86,6 +86,8 @@ export function buildSeasonPointsOptions(input: PointsChartInput): EChartsCoreOp
 export interface EntriesChartInput {
   entries: SeasonReport['entries'];
   theme: ChartTheme;
+  /** A wide screen pages a long legend in one row; a narrow one shows every breed, two to a row. */
+  wide: boolean;
 }
 
 /**
@@ -98,8 +100,8 @@ export function buildEntriesOptions(input: EntriesChartInput): EChartsCoreOption
   const axis = axisStyle(theme);
   return {
     ...chartBase(theme, `Entries at ${entries.shows.length} shows, stacked by breed.`, true),
-    legend: { type: 'scroll', top: 0, ...legendStyle(theme) },
-    grid: { left: 8, right: 16, top: 56, bottom: 8 },
+    legend: input.wide ? { type: 'scroll', top: 0, ...legendStyle(theme) } : { type: 'plain', top: 0, left: 0, itemGap: 8, ...legendStyle(theme) },
+    grid: { left: 8, right: 16, top: input.wide ? 56 : 32 + 24 * Math.ceil(entries.breeds.length / 2), bottom: 8 },
     tooltip: {
       trigger: 'axis',
       axisPointer: { type: 'shadow' },

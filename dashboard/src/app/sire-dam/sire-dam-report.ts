@@ -74,7 +74,8 @@ export class SireDamReport {
 
   private readonly sort = signal<RowOrder>({ active: 'rank', direction: '' });
   protected readonly rows = computed(() => sortRows(this.shown()?.parents ?? [], this.sort(), PARENT_SORT));
-  protected readonly columns = ['rank', 'earId', 'entries', 'offspring', 'share', 'shrunk', 'index', 'score', 'legs'];
+  // The share placed comes right after the parent: on a phone it stays in view.
+  protected readonly columns = ['rank', 'earId', 'share', 'entries', 'offspring', 'shrunk', 'index', 'score', 'legs'];
 
   protected readonly parentWords = PARENT_WORDS;
   protected readonly smallSample = SMALL_SAMPLE;

@@ -109,7 +109,7 @@ export function buildEstimatesOptions(report: HeritabilityReport, theme: ChartTh
           markArea: {
             silent: true,
             itemStyle: { color: theme.reference, opacity: 0.14 },
-            label: { show: true, position: 'bottom', distance: 4, color: theme.reference, fontFamily: theme.font, formatter: `Published ${range.lower}–${range.upper}` },
+            label: { show: true, position: 'top', distance: 4, color: theme.reference, fontFamily: theme.font, formatter: `Published ${range.lower}–${range.upper}` },
             data: [[{ xAxis: range.lower }, { xAxis: range.upper }]],
           },
         } : {}),
