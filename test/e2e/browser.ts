@@ -57,7 +57,7 @@ export async function panelScreenshots(page: Page, name: string): Promise<void> 
   for (const { width, height } of [DESKTOP, PHONE]) {
     await page.setViewportSize({ width, height });
     await page.waitForTimeout(300);
-    const tall = await page.evaluate(() => Math.max(...[...document.querySelectorAll('body *')].map((e) => e.scrollHeight)));
+    const tall = await page.locator('body *').evaluateAll((all) => Math.max(...all.map((e) => e.scrollHeight)));
     await page.setViewportSize({ width, height: Math.min(Math.max(height, tall + 80), 9000) });
     await page.waitForTimeout(500);
     await screenshot(page, `${name}-${width}`);
