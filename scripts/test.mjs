@@ -15,7 +15,10 @@ const onlyIdx = process.argv.indexOf('--only');
 const only = onlyIdx > 0 ? process.argv[onlyIdx + 1] : null;
 const wants = (suite) => !only || only === suite;
 const dashDash = process.argv.indexOf('--');
-const filters = dashDash > 0 ? process.argv.slice(dashDash + 1) : [];
+// `npm run test:e2e -- records` arrives without its `--` (npm takes it): plain words are filters too.
+const filters = dashDash > 0
+  ? process.argv.slice(dashDash + 1)
+  : process.argv.slice(2).filter((arg, i, all) => !arg.startsWith('--') && all[i - 1] !== '--only');
 
 ensureDependencies();
 if (wants('e2e') && !existsSync('/usr/bin/chromium')) {

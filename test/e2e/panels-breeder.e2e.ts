@@ -1,7 +1,7 @@
-import { readFile } from 'node:fs/promises';
+/// <reference lib="dom" />  // page.evaluate bodies run in the browser
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, screenshot, signInAs } from './browser';
+import { baseUrl, chartTextFills, chartWords, DESKTOP, downloadFrom, launchBrowser, panelScreenshots, signedInPage } from './browser';
 
 let browser: Browser;
 let herdId: number;
@@ -15,38 +15,20 @@ beforeAll(async () => {
 });
 afterAll(async () => { await browser.close(); });
 
-async function pageFor(email: string, viewport = DESKTOP): Promise<Page> {
-  const page = await browser.newPage({ viewport });
-  await signInAs(page, email);
-  return page;
-}
+const pageFor = (email: string, scheme: 'light' | 'dark' = 'light') => signedInPage(browser, email, DESKTOP, scheme);
 
-/** Text the panel's SVG chart drew (ECharts' SVG renderer puts legend and axis words in the page). */
-const chartText = (page: Page, nth = 0) => page.locator('kl-panel-chart svg').nth(nth).locator('text').allTextContents();
+/** Text the panel's nth SVG chart drew. */
+const chartText = (page: Page, nth = 0) => chartWords(page.locator('kl-panel-chart').nth(nth));
 
 /** The first rows of the keeper board, as ear IDs in rank order. */
 const boardOrder = (page: Page) => page.locator('tr.main-row').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-ear-id')));
 
-async function downloadOf(page: Page, button: string): Promise<{ name: string; text: string }> {
-  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: button, exact: true }).click()]);
-  const path = await download.path();
-  return { name: download.suggestedFilename(), text: path ? await readFile(path, 'utf8') : '' };
-}
-
-/**
- * Each panel at desktop and phone width, whole, for people to look at: the frame scrolls inside
- * the page, so the window is made as tall as the content for the picture.
- */
-async function screenshots(page: Page, name: string): Promise<void> {
-  for (const { width, height } of [DESKTOP, PHONE]) {
-    await page.setViewportSize({ width, height });
-    await page.waitForTimeout(300);
-    const tall = await page.evaluate(() => Math.max(...[...document.querySelectorAll('body *')].map((e) => e.scrollHeight)));
-    await page.setViewportSize({ width, height: Math.min(Math.max(height, tall + 80), 7000) });
-    await page.waitForTimeout(500);
-    await screenshot(page, `${name}-${width}`);
-  }
-  await page.setViewportSize(DESKTOP);
+/** WCAG relative luminance of an rgb()/hex colour ECharts wrote. */
+function luminance(colour: string): number {
+  const hex = /^#([0-9a-f]{6})/i.exec(colour)?.[1];
+  const rgb = hex ? [0, 2, 4].map((i) => parseInt(hex.slice(i, i + 2), 16)) : /(\d+)[\s,]+(\d+)[\s,]+(\d+)/.exec(colour)!.slice(1, 4).map(Number);
+  const [r, g, b] = rgb.map((v) => (v / 255 <= 0.03928 ? v / 255 / 12.92 : ((v / 255 + 0.055) / 1.055) ** 2.4));
+  return 0.2126 * r! + 0.7152 * g! + 0.0722 * b!;
 }
 
 describe('breeder analysis panels', () => {
@@ -76,13 +58,13 @@ describe('breeder analysis panels', () => {
     await expect.poll(async () => (await boardOrder(page)).slice(0, 3).join(), { timeout: 10_000 }).not.toBe(before.slice(0, 3).join());
     await expect.poll(() => chartText(page)).not.toContain('Breeding value');
 
-    const csv = await downloadOf(page, 'Download CSV');
+    const csv = await downloadFrom(page, 'Download CSV');
     expect(csv.name).toMatch(/keeper-board.*\.csv$/);
     expect(csv.text).toContain('Rank,Ear ID,Name');
     expect(csv.text.split('\n').length).toBeGreaterThan(2);
-    const png = await downloadOf(page, 'Save chart (PNG)');
+    const png = await downloadFrom(page, 'Save chart as PNG');
     expect(png.name).toMatch(/\.png$/);
-    await screenshots(page, 'panel-keepers');
+    await panelScreenshots(page, 'panel-keepers');
     await page.close();
   });
 
@@ -103,17 +85,42 @@ describe('breeder analysis panels', () => {
     await page.goto(`${baseUrl()}/r/${herdId}/sires-dams`);
     await expect.poll(() => page.locator('tr.mat-mdc-row').count()).toBeGreaterThan(1);
     await expect.poll(() => chartText(page)).toEqual(expect.arrayContaining(['Top-3 share', '95 % interval', 'Offspring entries placed in the top 3 (%)']));
+    // The chart's words are drawn in plain colours: ECharts cannot read the theme's light-dark() values.
+    const fills = await chartTextFills(page.locator('kl-panel-chart'));
+    expect(fills.length).toBeGreaterThan(5);
+    for (const fill of fills) expect(fill).toMatch(/^(rgb|#)/);
+    expect(Math.max(...fills.map((f) => luminance(f!)))).toBeLessThan(0.3);
     await page.getByRole('radio', { name: 'Dams' }).click();
     await page.waitForURL((u) => u.search.includes('parent=dam'));
     await expect.poll(() => page.locator('th').filter({ hasText: /^Dam$/ }).count()).toBe(1);
-    const csv = await downloadOf(page, 'Download CSV');
+    const csv = await downloadFrom(page, 'Download CSV');
     expect(csv.text).toContain('Dam ear ID');
-    await screenshots(page, 'panel-sires-dams');
+    await panelScreenshots(page, 'panel-sires-dams');
     const first = page.locator('tr.mat-mdc-row a.ear-id').first();
     const earId = await first.innerText();
     await first.click();
     await page.waitForURL(/\/animals\/\d+$/);
     await expect.poll(() => page.locator('main').innerText()).toContain(earId);
+    await page.close();
+  });
+
+  it('draws the charts in the dark scheme’s colours when the system asks for dark', async () => {
+    const page = await pageFor('owner@example.test', 'dark');
+    await page.goto(`${baseUrl()}/r/${herdId}/sires-dams`);
+    await expect.poll(() => chartText(page), { timeout: 10_000 }).toContain('95 % interval');
+    const fills = await chartTextFills(page.locator('kl-panel-chart'));
+    for (const fill of fills) expect(fill).toMatch(/^(rgb|#)/);
+    // Light words on the dark surface: every word at least as light as a mid grey.
+    expect(Math.min(...fills.map((f) => luminance(f!)))).toBeGreaterThan(0.2);
+    await panelScreenshots(page, 'panel-sires-dams-dark');
+    await page.close();
+  });
+
+  it('says what to change when no parent meets the filters', async () => {
+    const page = await pageFor('owner@example.test');
+    await page.goto(`${baseUrl()}/r/${herdId}/sires-dams?minEntries=1000`);
+    await expect.poll(() => page.locator('.empty h2').innerText(), { timeout: 10_000 }).toBe('No sires match these filters');
+    await panelScreenshots(page, 'panel-sires-dams-empty');
     await page.close();
   });
 
@@ -127,9 +134,9 @@ describe('breeder analysis panels', () => {
     await page.getByRole('switch', { name: 'Pool every herd I may see' }).click();
     await page.waitForURL((u) => u.search.includes('scope=all'));
     await expect.poll(() => page.locator('.scope').innerText()).toContain('Pooled');
-    const csv = await downloadOf(page, 'Download CSV');
+    const csv = await downloadFrom(page, 'Download CSV');
     expect(csv.text).toContain('Midparent–offspring regression');
-    await screenshots(page, 'panel-traits');
+    await panelScreenshots(page, 'panel-traits');
     await page.close();
   });
 
@@ -142,9 +149,9 @@ describe('breeder analysis panels', () => {
     await page.waitForURL((u) => u.search.includes('animals='));
     await expect.poll(() => page.locator('.weighings-table tr.mat-mdc-row').count(), { timeout: 10_000 }).toBeGreaterThan(0);
     expect(await page.locator('.weighings-table').innerText()).toMatch(/centile/);
-    const csv = await downloadOf(page, 'Download CSV');
+    const csv = await downloadFrom(page, 'Download CSV');
     expect(csv.text).toContain('Ear ID,Weighed on,Age (days),Weight (grams),Weight,Centile');
-    await screenshots(page, 'panel-growth');
+    await panelScreenshots(page, 'panel-growth');
     await page.close();
   });
 

@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseUrl, DESKTOP, launchBrowser, PHONE, screenshot, signInAs } from './browser';
+import { baseUrl, chartWords, DESKTOP, downloadFrom, launchBrowser, panelScreenshots, screenshot, signedInPage } from './browser';
 
 // The pairing planner, the club season and the line comparison, each opened by the role it is for.
 let browser: Browser;
@@ -11,21 +10,13 @@ afterAll(async () => { await browser.close(); });
 interface Me { user: { rabbitries: { id: number; name: string }[]; clubs: { id: number; name: string }[] } }
 
 async function pageFor(email: string, viewport = DESKTOP): Promise<{ page: Page; me: Me }> {
-  const page = await browser.newPage({ viewport, acceptDownloads: true });
-  await signInAs(page, email);
+  const page = await signedInPage(browser, email, viewport);
   const me = (await page.evaluate(() => fetch('/api/session').then((r) => r.json()))) as Me;
   return { page, me };
 }
 
-/** Words an SVG chart writes, so a test can check its legend and axis labels. */
-const chartText = (page: Page, selector: string) => page.locator(`${selector} svg text`).allTextContents().then((t) => t.join(' | '));
-
-/** Clicks a download button and returns the saved file's name and text. */
-async function download(page: Page, button: string): Promise<{ name: string; text: string }> {
-  const [file] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: button }).click()]);
-  const path = await file.path();
-  return { name: file.suggestedFilename(), text: readFileSync(path, 'utf8') };
-}
+/** Words the SVG charts under `selector` write, so a test can check their legends and axis labels. */
+const chartText = (page: Page, selector: string) => chartWords(page.locator(selector)).then((t) => t.join(' | '));
 
 describe('club and mentor panels', () => {
   it('the owner plans a pairing: the heatmap draws, a cell names its common ancestors, the mates save as CSV', async () => {
@@ -33,7 +24,7 @@ describe('club and mentor panels', () => {
     const herd = me.user.rabbitries[0]!;
     await page.goto(`${baseUrl()}/r/${herd.id}/pairing`);
     await expect.poll(() => page.locator('main h1').innerText()).toBe('Pairing planner');
-    await expect.poll(() => page.locator('kl-caution-note').innerText()).toMatch(/smaller litters/);
+    await expect.poll(() => page.locator('kl-cautions-note').innerText()).toMatch(/smaller litters/);
     await screenshot(page, 'pairing-empty-1280');
 
     await page.getByLabel('Plan for (ear ID or name)').fill('BF100');
@@ -52,9 +43,8 @@ describe('club and mentor panels', () => {
     await page.locator(ramp.map((c) => `.heatmap svg path[fill="${c}"]:not([transform])`).join(', ')).first().click({ force: true }); // its number lies over it; the chart takes the click either way
     await expect.poll(() => page.locator('.pair h3').innerText()).toMatch(/ × /);
     await expect.poll(() => page.locator('.pair').innerText()).toMatch(/share of the inbreeding|unrelated|related/i);
-    await screenshot(page, 'pairing-1280');
 
-    const csv = await download(page, 'Download mates CSV');
+    const csv = await downloadFrom(page, 'Download mates CSV');
     expect(csv.name).toMatch(/^bf100-mates-.*\.csv$/);
     expect(csv.text.split(/\r?\n/)[0]).toContain('Mate ear ID');
     expect(csv.text.split(/\r?\n/).length).toBeGreaterThan(2);
@@ -62,18 +52,8 @@ describe('club and mentor panels', () => {
     await page.locator('section[aria-labelledby="grid-title"] details summary').click();
     await page.locator('.grid-table button.cell').last().click();
     await expect.poll(() => page.locator('.pair h3').innerText()).toMatch(/ × /);
-    await page.locator('section[aria-labelledby="grid-title"]').scrollIntoViewIfNeeded();
-    await screenshot(page, 'pairing-grid-1280');
-    const url = page.url();
+    await panelScreenshots(page, 'panel-pairing');
     await page.close();
-
-    const phone = (await pageFor('owner@example.test', PHONE)).page;
-    await phone.goto(url);
-    await phone.locator('.heatmap svg').waitFor();
-    await screenshot(phone, 'pairing-360');
-    await phone.locator('.heatmap').scrollIntoViewIfNeeded();
-    await screenshot(phone, 'pairing-grid-360');
-    await phone.close();
   });
 
   it('the officer opens the season: standings rows, points lines with a legend, the formula editor', async () => {
@@ -102,24 +82,13 @@ describe('club and mentor panels', () => {
     await page.getByRole('button', { name: 'Undo changes' }).click();
     await screenshot(page, 'season-officer-1280');
 
-    const csv = await download(page, 'Download standings CSV');
+    const csv = await downloadFrom(page, 'Download standings CSV');
     expect(csv.name).toMatch(/standings.*\.csv$/);
     expect(csv.text.split(/\r?\n/)[0]).toContain('Exhibitor');
 
     await page.getByRole('button', { name: 'Close the season settings' }).click();
-    await page.locator(points).scrollIntoViewIfNeeded();
-    await screenshot(page, 'season-points-1280');
-    await page.locator('section[aria-labelledby="sires-title"]').scrollIntoViewIfNeeded();
-    await screenshot(page, 'season-sires-1280');
+    await panelScreenshots(page, 'panel-season');
     await page.close();
-
-    const phone = (await pageFor('officer@example.test', PHONE)).page;
-    await phone.goto(`${baseUrl()}/c/${club.id}/season`);
-    await phone.locator('kl-panel-chart svg').first().waitFor();
-    await screenshot(phone, 'season-360');
-    await phone.locator(points).scrollIntoViewIfNeeded();
-    await screenshot(phone, 'season-points-360');
-    await phone.close();
   });
 
   it('a member reads the season without the formula editor', async () => {
@@ -131,7 +100,6 @@ describe('club and mentor panels', () => {
     expect(await page.getByRole('button', { name: 'Season dates and points formula' }).count()).toBe(0);
     expect(await page.locator('kl-season-settings').count()).toBe(0);
     await expect.poll(() => page.locator('.kl-lede').innerText()).toMatch(/× animals in the class/);
-    await screenshot(page, 'season-member-1280');
     await page.close();
   });
 
@@ -147,9 +115,9 @@ describe('club and mentor panels', () => {
     expect(words).toContain('Ember');
     expect(words).toContain('percentile');
     expect(await page.locator('table.figures tr.mat-mdc-row').count()).toBeGreaterThan(4);
-    await screenshot(page, 'lines-1280');
+    await panelScreenshots(page, 'panel-lines');
 
-    const csv = await download(page, 'Download CSV');
+    const csv = await downloadFrom(page, 'Download CSV');
     expect(csv.text.split(/\r?\n/)[0]).toContain('Lower quartile');
 
     await page.getByLabel('Measure').click();
@@ -157,17 +125,15 @@ describe('club and mentor panels', () => {
     await page.waitForURL(/measure=litter_weaned/);
     await expect.poll(() => page.locator('kl-panel-chart').count()).toBe(1);
     await expect.poll(() => chartText(page, 'kl-panel-chart')).toContain('kits');
-    await screenshot(page, 'lines-one-1280');
-    await page.locator('table.figures').scrollIntoViewIfNeeded();
-    await screenshot(page, 'lines-table-1280');
+    await panelScreenshots(page, 'panel-lines-one');
     await page.close();
+  });
 
-    const phone = (await pageFor('mentor@example.test', PHONE)).page;
-    await phone.goto(`${baseUrl()}/r/${herd.id}/lines`);
-    await phone.locator('kl-panel-chart svg').first().waitFor();
-    await screenshot(phone, 'lines-360');
-    await phone.locator('kl-panel-chart').first().scrollIntoViewIfNeeded();
-    await screenshot(phone, 'lines-chart-360');
-    await phone.close();
+  it('a member of a club without results reads what to do next', async () => {
+    const { page, me } = await pageFor('other-club@example.test');
+    await page.goto(`${baseUrl()}/c/${me.user.clubs[0]!.id}/season`);
+    await expect.poll(() => page.locator('main').innerText(), { timeout: 15_000 }).toMatch(/No results imported for this season yet|Standings/);
+    await panelScreenshots(page, 'panel-season-other-club');
+    await page.close();
   });
 });

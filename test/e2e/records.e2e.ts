@@ -1,3 +1,4 @@
+/// <reference lib="dom" />  // page.evaluate bodies run in the browser
 import { readFile } from 'node:fs/promises';
 import { PDFParse } from 'pdf-parse';
 import type { Browser, Page } from 'playwright-core';

@@ -1,22 +1,8 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { NgxEchartsDirective, provideEchartsCore } from 'ngx-echarts';
 import type { UnitSetting } from '@shared/units/weight';
-import { buildWeightChartOptions, type ChartTheme, type WeightChartInput } from './weight-chart-options';
-
-/** The page's theme colours and font, read once from the Material system variables. */
-function themeOf(element: HTMLElement): ChartTheme {
-  const style = getComputedStyle(element);
-  const v = (name: string, fallback: string) => style.getPropertyValue(name).trim() || fallback;
-  return {
-    font: style.fontFamily || 'sans-serif',
-    text: v('--mat-sys-on-surface', '#1b1b1f'),
-    muted: v('--mat-sys-on-surface-variant', '#46464f'),
-    line: v('--mat-sys-primary', '#34518c'),
-    grid: v('--mat-sys-outline-variant', '#c6c5d0'),
-    risk: v('--mat-sys-error', '#ba1a1a'),
-    ideal: v('--mat-sys-tertiary', '#6b5778'),
-  };
-}
+import { injectChartTheme } from '../panels/chart-theme';
+import { buildWeightChartOptions, type WeightChartInput } from './weight-chart-options';
 
 @Component({
   selector: 'kl-weight-chart',
@@ -38,18 +24,18 @@ export class WeightChart {
   readonly unit = input.required<UnitSetting>();
   readonly seniorLimits = input<WeightChartInput['seniorLimits']>(null);
 
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
-  // Read when the chart is first drawn: only an element in the page inherits the theme's variables.
-  private theme: ChartTheme | null = null;
-  protected readonly options = computed(() =>
-    buildWeightChartOptions({
+  // The panels' theme: plain colours for the scheme in force, the weighings in the first series hue.
+  private readonly theme = injectChartTheme();
+  protected readonly options = computed(() => {
+    const { font, text, muted, grid, risk, reference, series } = this.theme();
+    return buildWeightChartOptions({
       weights: this.weights(),
       birthDate: this.birthDate(),
       unit: this.unit(),
       seniorLimits: this.seniorLimits(),
-      theme: (this.theme ??= themeOf(this.host)),
-    }),
-  );
+      theme: { font, text, muted, grid, risk, ideal: reference, line: series[0]! },
+    });
+  });
   protected readonly label = computed(() => {
     const n = this.weights().length;
     return `Chart of ${n} weighing${n === 1 ? '' : 's'} against ${this.birthDate() ? 'age' : 'date'}; the table lists the same values.`;

@@ -3,7 +3,7 @@ import { Injectable } from '@angular/core';
 import { GrowthReport } from '@shared/contracts/analytics';
 import { HerdPage } from '@shared/contracts/animals';
 import { animalsUrl } from '../herd/herd-api';
-import { analyticsUrl } from '../keepers/keepers-api';
+import { analyticsUrl } from '../panels/analytics-url';
 import { growthParams, type GrowthView } from './growth-view';
 
 /** Growth bands and chosen animals' weighings; herd animals found by ear ID or name to add. */

@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from '../keepers/chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildGrowthOptions, centileText, growthChartWeeks, monthsText, weeksOf } from './growth-chart-options';
 import { growthAnimal, reference } from './growth-fixtures';
 
@@ -43,6 +43,15 @@ describe('buildGrowthOptions', () => {
     // The adult weighing at 287 days (41 weeks) is on the chart now.
     expect(((o['series'] as Series[]).find((s) => s.name === 'BF177')!.data as unknown[])).toHaveLength(3);
     expect([183, 243, 365, 548].map(monthsText)).toEqual(['6 months', '8 months', '12 months', '18 months']);
+  });
+
+  it('keeps the chosen animals’ lines off the bands’ hue, and shows every legend entry on a phone', () => {
+    const series = build('kg')['series'] as (Series & { lineStyle?: { color: string }; areaStyle?: { color: string } })[];
+    const bandHue = series.find((s) => s.areaStyle)!.areaStyle!.color;
+    expect(series.filter((s) => s.name.startsWith('BF')).map((s) => s.lineStyle!.color)).not.toContain(bandHue);
+    const phone = buildGrowthOptions({ reference: reference('doe'), animals: [growthAnimal(1, 'BF177')], seniorAgeDays: 243, unit: 'kg', theme, narrow: true });
+    expect(phone['legend']).toMatchObject({ type: 'plain' });
+    expect((phone['grid'] as { top: number }).top).toBeGreaterThan((build('kg')['grid'] as { top: number }).top);
   });
 
   it('puts each chosen animal’s weighings on top, leaving later ones to the table', () => {

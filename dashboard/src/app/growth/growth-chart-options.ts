@@ -3,8 +3,8 @@ import type { GrowthAnimal, GrowthReferenceReport } from '@shared/contracts/anal
 import { ordinal } from '@shared/domain/ordinal';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import { axisValue } from '../animal/weight-chart-options';
-import { axisStyle, chartBase, type ChartTheme } from '../keepers/chart-theme';
-import { intervalLegend, intervalSeries } from '../keepers/interval-series';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
+import { intervalLegend, intervalSeries } from '../panels/interval-series';
 
 export interface GrowthChartInput {
   reference: GrowthReferenceReport | null;
@@ -14,6 +14,8 @@ export interface GrowthChartInput {
   theme: ChartTheme;
   /** The x axis ends here (default: growthChartWeeks of the reference); later weighings are in the table only. */
   maxWeeks?: number;
+  /** A phone: every legend entry shown, wrapped above the plot, rather than paged. */
+  narrow?: boolean;
 }
 
 /** The chart spans at least this many weeks, and further where the reference reaches. */
@@ -26,7 +28,8 @@ export function growthChartWeeks(reference: GrowthReferenceReport | null): numbe
 
 /** An age in whole months: 365 → "12 months", 243 → "8 months". */
 export const monthsText = (days: number) => `${Math.round(days / (365.25 / 12))} months`;
-const BAND_HUE = 4;
+/** The bands take fern green, a hue no chosen animal's line takes. */
+const BAND_HUE = 2;
 
 export const weeksOf = (days: number) => Math.round((days / 7) * 10) / 10;
 
@@ -59,7 +62,7 @@ export function animalHue(theme: ChartTheme, i: number): string {
  * as a whisker (side by side when several animals are projected). Weights in the user's unit
  * (pounds or kilograms on the axis, lb-oz or kg in tooltips). O(bands + weighings).
  */
-export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, theme, maxWeeks = growthChartWeeks(reference) }: GrowthChartInput): EChartsCoreOption {
+export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, theme, maxWeeks = growthChartWeeks(reference), narrow = false }: GrowthChartInput): EChartsCoreOption {
   const y = (grams: number) => axisValue(grams, unit);
   const bands = (reference?.bands ?? []).filter((b) => weeksOf(b.midDays) <= maxWeeks);
   const at = (key: (typeof BAND_STEPS)[number][0]) => bands.map((b) => (b.centiles ? [weeksOf(b.midDays), y(b.centiles[key])] : [weeksOf(b.midDays), '-']));
@@ -145,19 +148,19 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
     return '';
   };
 
+  const legendData = [
+    ...(reference ? [...['25th–75th centile', '10th–90th centile', '3rd–97th centile'].map((name) => ({ name, icon: 'rect' })), 'Median (50th)'] : []),
+    ...animals.map((a) => a.animal.earId),
+    ...(projected.length ? ['Projected senior weight', intervalLegend('95 % interval')] : []),
+  ];
+  // About two entries to a row on a phone.
+  const legendRows = narrow ? Math.ceil(legendData.length / 2) : 1;
+
   return {
     ...chartBase(theme, `Growth centile bands of ${refName} by week of age${animals.length ? `, with ${animals.length} chosen animal${animals.length === 1 ? '' : 's'}` : ''}.`),
-    legend: {
-      type: 'scroll', top: 0, left: 0, selectedMode: false,
-      textStyle: { color: theme.text, fontFamily: theme.font },
-      data: [
-        ...(reference ? [...['25th–75th centile', '10th–90th centile', '3rd–97th centile'].map((name) => ({ name, icon: 'rect' })), 'Median (50th)'] : []),
-        ...animals.map((a) => a.animal.earId),
-        ...(projected.length ? ['Projected senior weight', intervalLegend('95 % interval')] : []),
-      ],
-    },
-    grid: { left: 16, right: 24, top: 48, bottom: 52 },
-    tooltip: { trigger: 'item', confine: true, textStyle: { fontFamily: theme.font }, formatter: tooltip },
+    legend: { type: narrow ? 'plain' : 'scroll', top: 0, left: 0, selectedMode: false, ...legendStyle(theme), data: legendData },
+    grid: { left: 16, right: 24, top: 24 + 24 * legendRows, bottom: 52 },
+    tooltip: { trigger: 'item', ...tooltipStyle(theme), formatter: tooltip },
     xAxis: { type: 'value', min: 0, max: maxWeeks, name: 'Age (weeks)', nameLocation: 'middle', nameGap: 30, ...axisStyle(theme) },
     yAxis: { type: 'value', min: 0, name: `Weight (${unitName})`, nameLocation: 'middle', nameGap: 40, ...axisStyle(theme) },
     series: [...bandSeries, ...animalSeries, ...projectionSeries],

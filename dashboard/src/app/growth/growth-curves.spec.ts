@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { settle, stubBrowserForCharts } from '../keepers/jsdom-chart-stubs';
+import { settle, stubChartEnvironment } from '../panels/chart-stubs';
 import { signInAs, userWith } from '../session/test-users';
 import { GrowthCurves } from './growth-curves';
 import { growthAnimal, growthReport, reference } from './growth-fixtures';
@@ -16,7 +16,7 @@ describe('GrowthCurves', { timeout: 30_000 }, () => {
   let harness: RouterTestingHarness;
   let el: HTMLElement;
 
-  beforeAll(() => stubBrowserForCharts());
+  beforeAll(() => stubChartEnvironment());
   afterEach(() => backend.verify());
 
   async function open(address: string, weightUnit: 'lb-oz' | 'kg' = 'lb-oz') {

@@ -1,6 +1,4 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal, signal, viewChild } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatAutocompleteModule, type MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
 import { MatChipsModule } from '@angular/material/chips';
@@ -11,19 +9,20 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
-import { map } from 'rxjs';
-import type { GrowthReport } from '@shared/contracts/analytics';
 import type { HerdRow } from '@shared/contracts/animals';
+import { GROWTH_CAUTIONS } from '@shared/domain/cautions';
 import type { Sex } from '@shared/domain/terms';
 import { formatWeight } from '@shared/units/weight';
 import { BreedsApi } from '../breeds/breeds-api';
-import { CautionsNote } from '../keepers/cautions-note';
-import { readChartTheme } from '../keepers/chart-theme';
-import { PanelChart } from '../keepers/panel-chart';
-import type { SortDirection } from '../keepers/sort-rows';
 import { LittersApi } from '../litters/litters-api';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { PHONE_WIDTH, mediaMatches } from '../panels/media-query';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
@@ -31,7 +30,7 @@ import { LoadError } from '../status/load-error';
 import { GrowthApi } from './growth-api';
 import { buildGrowthOptions, growthChartWeeks } from './growth-chart-options';
 import {
-  ageText, bandCsvColumns, centileKeys, centileLabel, centileText, projectionText, sortWeighings, weighingCsvColumns, weighingRows, type WeighingSortKey,
+  WEIGHING_SORT, ageText, bandCsvColumns, centileKeys, centileLabel, centileText, projectionText, weighingCsvColumns, weighingRows,
 } from './growth-table';
 import { MAX_CHOSEN, growthParams, growthViewFrom, referenceFor, withAnimal, withoutAnimal, type GrowthView } from './growth-view';
 
@@ -48,22 +47,15 @@ import { MAX_CHOSEN, growthParams, growthViewFrom, referenceFor, withAnimal, wit
 })
 export class GrowthCurves {
   private readonly api = inject(GrowthApi);
-  private readonly route = inject(ActivatedRoute);
-  private readonly router = inject(Router);
   private readonly session = inject(Session);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
-  private readonly chart = viewChild(PanelChart);
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => growthViewFrom(p))), {
-    initialValue: growthViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(growthViewFrom, growthParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.growth(this.rabbitryId, this.view);
-  protected readonly shown = linkedSignal<GrowthReport | undefined, GrowthReport | undefined>({
-    source: () => (this.report.hasValue() ? this.report.value() : undefined),
-    computation: (next, previous) => next ?? previous?.value,
-  });
+  protected readonly shown = lastValue(this.report);
+  protected readonly cautions = GROWTH_CAUTIONS;
   protected readonly unit = computed(() => this.session.user()?.weightUnit ?? 'lb-oz');
   protected readonly canEdit = computed(() => editsRecords(rabbitryRoleOf(this.session.user(), this.rabbitryId())));
 
@@ -84,26 +76,27 @@ export class GrowthCurves {
   });
   protected readonly animals = computed(() => this.shown()?.animals ?? []);
 
-  private theme: ReturnType<typeof readChartTheme> | null = null;
+  private readonly theme = injectChartTheme();
   protected readonly options = computed(() => {
     const r = this.shown();
     return buildGrowthOptions({
       reference: this.reference(), animals: this.animals(), seniorAgeDays: r?.seniorAgeDays ?? 365, unit: this.unit(), maxWeeks: this.maxWeeks(),
-      theme: (this.theme ??= readChartTheme(this.host)),
+      theme: this.theme(),
+      narrow: this.isPhone(),
     });
   });
   /** The chart runs as far as the reference reaches (at least 36 weeks). */
   protected readonly maxWeeks = computed(() => growthChartWeeks(this.reference()));
   protected readonly laterWeighings = computed(() => this.animals().reduce((n, a) => n + a.weighings.filter((w) => w.ageDays > this.maxWeeks() * 7).length, 0));
 
-  private readonly sort = signal<Sort>({ active: 'earId', direction: '' });
-  private readonly allWeighings = computed(() => sortWeighings(weighingRows(this.animals()), this.sort().active as WeighingSortKey, this.sort().direction as SortDirection));
+  private readonly sort = signal<RowOrder>({ active: 'earId', direction: '' });
+  private readonly allWeighings = computed(() => sortRows(weighingRows(this.animals()), this.sort(), WEIGHING_SORT));
   /** Adult weighings of an old animal would bury the growing ones: they wait behind a button (the CSV has all). */
   protected readonly showLater = signal(false);
   protected readonly weighings = computed(() =>
     this.showLater() ? this.allWeighings() : this.allWeighings().filter((w) => w.ageDays <= this.maxWeeks() * 7),
   );
-  protected readonly isPhone = toSignal(inject(BreakpointObserver).observe('(max-width: 600px)').pipe(map((s) => s.matches)), { initialValue: false });
+  protected readonly isPhone = mediaMatches(PHONE_WIDTH, false);
   protected readonly showFilters = signal(false);
   protected readonly weighingColumns = ['earId', 'weighedOn', 'ageDays', 'grams', 'percentile'];
   protected readonly bandColumns = ['weeks', 'n', ...centileKeys];
@@ -163,12 +156,12 @@ export class GrowthCurves {
     if (ref) downloadCsv(csvFileName('growth bands', ref.breed.name, ref.sex), ref.bands, bandCsvColumns(ref));
   }
 
-  protected savePng(): void {
+  protected readonly fileStem = computed(() => {
     const ref = this.reference();
-    void this.chart()?.savePng(csvFileName('growth curves', ref?.breed.name, ref?.sex).replace(/\.csv$/, '.png'));
-  }
+    return csvFileName('growth curves', ref?.breed.name, ref?.sex).replace(/\.csv$/, '');
+  });
 
   private show(view: GrowthView): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: growthParams(view), replaceUrl: true });
+    this.address.show(view);
   }
 }

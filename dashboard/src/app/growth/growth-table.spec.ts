@@ -1,13 +1,14 @@
 import { toCsv } from '@shared/csv/to-csv';
+import { sortRows } from '../panels/sort-rows';
 import { growthAnimal, growthReport, reference } from './growth-fixtures';
-import { ageText, bandCsvColumns, projectionText, sortWeighings, weighingCsvColumns, weighingRows } from './growth-table';
+import { WEIGHING_SORT, ageText, bandCsvColumns, projectionText, weighingCsvColumns, weighingRows } from './growth-table';
 import { referenceFor, withAnimal, withoutAnimal } from './growth-view';
 
 describe('growth tables and choices', () => {
   it('lists every weighing of the chosen animals and sorts them by centile, missing last', () => {
     const rows = weighingRows([growthAnimal(1, 'BF177'), growthAnimal(2, 'BF179', { weighings: [{ weighedOn: '2026-09-12', ageDays: 56, grams: 700, z: -1, percentile: 12 }] })]);
     expect(rows).toHaveLength(4);
-    expect(sortWeighings(rows, 'percentile', 'asc').map((r) => `${r.earId}:${r.percentile}`)).toEqual(['BF179:12', 'BF177:48.6', 'BF177:62.2', 'BF177:null']);
+    expect(sortRows(rows, { active: 'percentile', direction: 'asc' }, WEIGHING_SORT).map((r) => `${r.earId}:${r.percentile}`)).toEqual(['BF179:12', 'BF177:48.6', 'BF177:62.2', 'BF177:null']);
   });
 
   it('says ages in weeks and days, and projections with their interval', () => {

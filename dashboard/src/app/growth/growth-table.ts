@@ -2,7 +2,7 @@ import type { GrowthAnimal, GrowthReferenceReport } from '@shared/contracts/anal
 import type { CsvColumn } from '@shared/csv/to-csv';
 import { ordinal } from '@shared/domain/ordinal';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
-import { sortRows, type SortDirection } from '../keepers/sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 import { centileText, monthsText } from './growth-chart-options';
 
 /** One weighing of a chosen animal, as the table lists it. */
@@ -22,11 +22,14 @@ export function weighingRows(animals: readonly GrowthAnimal[]): WeighingRow[] {
   );
 }
 
-export type WeighingSortKey = 'earId' | 'weighedOn' | 'ageDays' | 'grams' | 'percentile';
-
-export function sortWeighings(rows: readonly WeighingRow[], key: WeighingSortKey, dir: SortDirection): WeighingRow[] {
-  return sortRows(rows, (r) => r[key], dir);
-}
+/** The weighings table's sortable columns. */
+export const WEIGHING_SORT: SortKeys<WeighingRow> = {
+  earId: (r) => r.earId,
+  weighedOn: (r) => r.weighedOn,
+  ageDays: (r) => r.ageDays,
+  grams: (r) => r.grams,
+  percentile: (r) => r.percentile,
+};
 
 /** "12 weeks 3 days" (or "3 days"). */
 export function ageText(days: number): string {

@@ -1,10 +1,10 @@
 import { GrowthQuery, type GrowthReferenceReport, type GrowthReport } from '@shared/contracts/analytics';
-import { queryParamsOf, queryViewFrom } from '../keepers/query-view';
+import { queryParamsOf, queryViewFrom, type QueryParams } from '../panels/query-view';
 
 /** Breed, sex, chosen animals or litter and pooling, kept in the address: the API's growth query. */
 export type GrowthView = GrowthQuery;
 
-export const growthViewFrom = (params: Record<string, string | undefined>): GrowthView => queryViewFrom(GrowthQuery, params);
+export const growthViewFrom = (params: QueryParams): GrowthView => queryViewFrom(GrowthQuery, params);
 export const growthParams = (view: GrowthView): Record<string, string> => queryParamsOf(GrowthQuery, view);
 
 /** The API takes up to 50 animals at once. */

@@ -4,8 +4,9 @@ import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import type { RabbitryRole } from '@shared/contracts/roles';
+import { KEEPER_CAUTIONS } from '@shared/domain/cautions';
+import { settle, stubChartEnvironment } from '../panels/chart-stubs';
 import { signInAs, userWith } from '../session/test-users';
-import { settle, stubBrowserForCharts } from './jsdom-chart-stubs';
 import { KeeperBoard } from './keeper-board';
 import { candidate, keepersReport } from './keeper-fixtures';
 
@@ -32,7 +33,7 @@ describe('KeeperBoard', { timeout: 30_000 }, () => {
   let harness: RouterTestingHarness;
   let el: HTMLElement;
 
-  beforeAll(() => stubBrowserForCharts());
+  beforeAll(() => stubChartEnvironment());
   afterEach(() => backend.verify());
 
   async function openAs(role: RabbitryRole, url = '/r/7/keepers') {
@@ -69,7 +70,7 @@ describe('KeeperBoard', { timeout: 30_000 }, () => {
     expect(el.querySelector('.explain')?.textContent).toContain('Ranked 1st of 2: strong breeding value for weight at 12 weeks');
     expect(el.querySelectorAll('.risk')).toHaveLength(1);
     expect(toggles()).toHaveLength(2);
-    expect(el.querySelector('aside[aria-label="Cautions"]')?.textContent).toContain('Support the hindquarters');
+    expect(el.querySelector('aside[aria-label="Cautions"]')?.textContent).toContain(KEEPER_CAUTIONS[0]);
     expect(el.querySelector('.read-only')).toBeNull();
   });
 

@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, computed, inject, input, linkedSignal, signal, viewChild } from '@angular/core';
-import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, input, linkedSignal, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleChange, MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,30 +9,35 @@ import { MatSliderModule } from '@angular/material/slider';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { NgTemplateOutlet } from '@angular/common';
+import { RouterLink } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
-import { Subject, debounceTime, map } from 'rxjs';
-import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent, type KeepersReport } from '@shared/contracts/analytics';
+import { Subject, debounceTime } from 'rxjs';
+import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent } from '@shared/contracts/analytics';
 import type { KeeperDecision } from '@shared/contracts/animals';
+import { KEEPER_CAUTIONS } from '@shared/domain/cautions';
 import { formatWeight } from '@shared/units/weight';
 import { AnimalApi } from '../animal/animal-api';
 import { BreedsApi } from '../breeds/breeds-api';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { PHONE_WIDTH, mediaMatches } from '../panels/media-query';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
+import { traitChoices } from '../panels/trait-choices';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
 import { describeFailure } from '../status/describe-failure';
 import { LoadError } from '../status/load-error';
-import { traitChoices } from '../traits/trait-choices';
-import { CautionsNote } from './cautions-note';
-import { readChartTheme } from './chart-theme';
 import { buildKeeperBoardOptions, keeperChartHeight } from './keeper-chart-options';
 import {
-  DECISION_LABELS, componentValue, contributionText, keeperCsvColumns, partOf, sortKeeperRows, type KeeperSortKey,
+  DECISION_LABELS, KEEPER_SORT, componentValue, contributionText, keeperCsvColumns, partOf,
 } from './keeper-table';
 import { KEEPER_DEFAULTS, KEEPER_WEIGHT_RANGE, keeperParams, keeperViewFrom, type KeeperView } from './keeper-view';
 import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
 import { KeepersApi } from './keepers-api';
-import { PanelChart } from './panel-chart';
 
 @Component({
   selector: 'kl-keeper-board',
@@ -40,7 +45,7 @@ import { PanelChart } from './panel-chart';
   styleUrl: './keeper-board.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
-    RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatProgressBarModule, MatSelectModule,
+    NgTemplateOutlet, RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatProgressBarModule, MatSelectModule,
     MatSliderModule, MatSortModule, MatTableModule, CautionsNote, LoadError, PanelChart,
   ],
   providers: [provideEchartsCore({ echarts: () => import('./keeper-echarts').then((m) => m.echarts) })],
@@ -48,24 +53,16 @@ import { PanelChart } from './panel-chart';
 export class KeeperBoard {
   private readonly api = inject(KeepersApi);
   private readonly animals = inject(AnimalApi);
-  private readonly route = inject(ActivatedRoute);
-  private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly session = inject(Session);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
-  private readonly chart = viewChild(PanelChart);
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => keeperViewFrom(p))), {
-    initialValue: keeperViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(keeperViewFrom, keeperParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.ranking(this.rabbitryId, this.view);
   /** The last board received stays in view while the next weights are worked out. */
-  protected readonly shown = linkedSignal<KeepersReport | undefined, KeepersReport | undefined>({
-    source: () => (this.report.hasValue() ? this.report.value() : undefined),
-    computation: (next, previous) => next ?? previous?.value,
-  });
+  protected readonly shown = lastValue(this.report);
   protected readonly candidates = computed(() => this.shown()?.candidates ?? []);
 
   /** The sliders follow the hand at once; the address (and the board) follow a moment later. */
@@ -80,6 +77,7 @@ export class KeeperBoard {
   protected readonly components = KEEPER_COMPONENTS;
   protected readonly labels = KEEPER_COMPONENT_LABELS;
   protected readonly range = KEEPER_WEIGHT_RANGE;
+  protected readonly cautions = KEEPER_CAUTIONS;
   protected readonly decisionLabels = DECISION_LABELS;
   protected readonly decisionChoices: KeeperDecision[] = ['keep', 'sell', 'undecided'];
   protected readonly hints: Record<KeeperComponent, string> = {
@@ -90,8 +88,8 @@ export class KeeperBoard {
     inbreeding: 'A penalty: the more inbred, the lower the index.',
   };
 
-  private theme: ReturnType<typeof readChartTheme> | null = null;
-  protected readonly options = computed(() => buildKeeperBoardOptions({ candidates: this.candidates(), theme: (this.theme ??= readChartTheme(this.host)) }));
+  private readonly theme = injectChartTheme();
+  protected readonly options = computed(() => buildKeeperBoardOptions({ candidates: this.candidates(), theme: this.theme() }));
   protected readonly chartHeight = computed(() => keeperChartHeight(this.candidates().length));
 
   /** Decisions saved from this board since it was loaded (the report is not fetched again for them). */
@@ -100,13 +98,15 @@ export class KeeperBoard {
     return this.decided().get(c.animal.id) ?? c.keeperDecision;
   }
 
-  private readonly sort = signal<Sort>({ active: 'rank', direction: '' });
-  protected readonly rows = computed(() => sortKeeperRows(this.candidates(), this.sort().active as KeeperSortKey, this.sort().direction));
+  private readonly sort = signal<RowOrder>({ active: 'rank', direction: '' });
+  protected readonly rows = computed(() => sortRows(this.candidates(), this.sort(), KEEPER_SORT));
   /** The API's explanation of each rank, in the user's weight unit. */
   protected readonly explanations = computed(() => new Map(this.candidates().map((c) => [c.animal.id, c.explanation.join(' ')])));
+  protected readonly isPhone = mediaMatches(PHONE_WIDTH, false);
   protected readonly columns = computed(() => [
-    // The decision comes early: it is what the breeder came to do, and must not scroll out of view.
-    'rank', 'earId', 'total', 'decision', ...KEEPER_COMPONENTS.filter((c) => this.view().weights[c] !== 0), 'projected',
+    // The decision comes early: it is what the breeder came to do, and must not scroll out of view
+    // (on a phone it moves under each junior's sentence).
+    'rank', 'earId', 'total', ...(this.isPhone() ? [] : ['decision']), ...KEEPER_COMPONENTS.filter((c) => this.view().weights[c] !== 0), 'projected',
   ]);
 
   protected readonly componentValue = componentValue;
@@ -152,19 +152,20 @@ export class KeeperBoard {
     });
   }
 
+  /** The files' name: rabbitry, board and date. */
+  protected readonly fileStem = computed(() => {
+    const report = this.shown();
+    const rabbitry = report?.scope.rabbitries.find((r) => String(r.id) === this.rabbitryId())?.name;
+    return csvFileName(rabbitry, 'keeper board', report?.asOf).replace(/\.csv$/, '');
+  });
+
   protected saveCsv(): void {
     const report = this.shown();
     if (!report) return;
-    const rabbitry = report.scope.rabbitries.find((r) => String(r.id) === this.rabbitryId())?.name;
-    downloadCsv(csvFileName(rabbitry, 'keeper board', report.asOf), this.rows(), keeperCsvColumns(this.unit(), (c) => this.decisionOf(c)));
-  }
-
-  protected savePng(): void {
-    const report = this.shown();
-    void this.chart()?.savePng(csvFileName('keeper board', report?.asOf).replace(/\.csv$/, '.png'));
+    downloadCsv(`${this.fileStem()}.csv`, this.rows(), keeperCsvColumns(this.unit(), (c) => this.decisionOf(c)));
   }
 
   private show(view: KeeperView): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: keeperParams(view), replaceUrl: true });
+    this.address.show(view);
   }
 }

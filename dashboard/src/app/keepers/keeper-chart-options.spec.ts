@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from './chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildKeeperBoardOptions, keeperChartHeight, keeperRowLabel } from './keeper-chart-options';
 import { candidate } from './keeper-fixtures';
 
@@ -28,7 +28,7 @@ describe('buildKeeperBoardOptions', () => {
     const y = options['yAxis'] as { type: string; inverse: boolean; data: string[] };
     expect(y).toMatchObject({ type: 'category', inverse: true, data: ['1. BF177', '2. BF175 ⚠'] });
     expect(keeperRowLabel(second)).toBe('2. BF175 ⚠');
-    expect((options['xAxis'] as { name: string }).name).toBe('Contribution to the index');
+    expect((options['xAxis'] as { name: string }).name).toBe('Contribution to the index (weight × SD)');
   });
 
   it('leaves out a component the breeder weighted 0 (the report no longer carries it)', () => {

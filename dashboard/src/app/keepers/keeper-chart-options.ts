@@ -1,6 +1,6 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import { KEEPER_COMPONENTS, KEEPER_COMPONENT_LABELS, type KeeperComponent } from '@shared/contracts/analytics';
-import { axisStyle, chartBase, type ChartTheme } from './chart-theme';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
 import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
 
 export interface KeeperChartInput {
@@ -40,18 +40,17 @@ export function buildKeeperBoardOptions({ candidates, theme }: KeeperChartInput)
   }));
   return {
     ...chartBase(theme, `Keeper index of ${candidates.length} juniors, best first, each bar split into its weighted components.`, true),
-    legend: { top: 0, left: 0, textStyle: { color: theme.text, fontFamily: theme.font }, data: [...present.map((c) => KEEPER_COMPONENT_LABELS[c]), 'Index total'] },
+    legend: { top: 0, left: 0, ...legendStyle(theme), data: [...present.map((c) => KEEPER_COMPONENT_LABELS[c]), 'Index total'] },
     grid: { left: 8, right: 24, top: 64, bottom: 48 },
     tooltip: {
       trigger: 'axis',
       axisPointer: { type: 'shadow' },
-      confine: true,
-      textStyle: { fontFamily: theme.font },
+      ...tooltipStyle(theme),
       valueFormatter: (v: number) => (v > 0 ? `+${v.toFixed(2)}` : v.toFixed(2)),
     },
     xAxis: {
       type: 'value',
-      name: 'Contribution to the index',
+      name: 'Contribution to the index (weight × SD)',
       nameLocation: 'middle',
       nameGap: 30,
       ...axisStyle(theme),

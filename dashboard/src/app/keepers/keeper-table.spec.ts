@@ -1,6 +1,7 @@
 import { toCsv } from '@shared/csv/to-csv';
-import { candidate } from './keeper-fixtures';
-import { componentValue, keeperCsvColumns, projectedText, sortKeeperRows } from './keeper-table';
+import { candidate, keepersReport } from './keeper-fixtures';
+import { sortRows } from '../panels/sort-rows';
+import { KEEPER_SORT, componentValue, keeperCsvColumns, projectedText } from './keeper-table';
 
 describe('keeper table', () => {
   it('shows each raw value with its unit', () => {
@@ -21,9 +22,9 @@ describe('keeper table', () => {
   it('sorts by a component’s contribution and back to rank order when cleared', () => {
     const a = candidate({ id: 1, earId: 'BF10', rank: 1, z: [1, 0, 0, 0, 0] });
     const b = candidate({ id: 2, earId: 'BF9', rank: 2, z: [0, 0, 2, 0, 0] });
-    expect(sortKeeperRows([a, b], 'weightOnTarget', 'desc').map((c) => c.animal.earId)).toEqual(['BF9', 'BF10']);
-    expect(sortKeeperRows([a, b], 'earId', 'asc').map((c) => c.animal.earId)).toEqual(['BF9', 'BF10']);
-    expect(sortKeeperRows([a, b], 'weightOnTarget', '').map((c) => c.rank)).toEqual([1, 2]);
+    expect(sortRows([a, b], { active: 'weightOnTarget', direction: 'desc' }, KEEPER_SORT).map((c) => c.animal.earId)).toEqual(['BF9', 'BF10']);
+    expect(sortRows([a, b], { active: 'earId', direction: 'asc' }, KEEPER_SORT).map((c) => c.animal.earId)).toEqual(['BF9', 'BF10']);
+    expect(sortRows([a, b], { active: 'weightOnTarget', direction: '' }, KEEPER_SORT).map((c) => c.rank)).toEqual([1, 2]);
   });
 
   it('exports every component’s value, weight and contribution, the decision and the explanation, formula-safe', () => {

@@ -3,7 +3,7 @@ import type { KeeperDecision } from '@shared/contracts/animals';
 import type { CsvColumn } from '@shared/csv/to-csv';
 import { formatWeight, type UnitSetting } from '@shared/units/weight';
 import type { KeeperCandidate } from '@shared/domain/keeper-explanation';
-import { sortRows, type SortDirection } from './sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 
 export const DECISION_LABELS: Record<KeeperDecision, string> = { keep: 'Keep', sell: 'Sell', undecided: 'Undecided' };
 
@@ -43,18 +43,13 @@ export function projectedText(c: KeeperCandidate, unit: UnitSetting): string {
   return p.lower !== null && p.upper !== null ? `${w(p.grams)} (${w(p.lower)} – ${w(p.upper)})` : w(p.grams);
 }
 
-export type KeeperSortKey = 'rank' | 'earId' | 'projected' | KeeperComponent;
-
-/** The board's rows in a table order; ties (and a cleared sort) keep the rank order. O(n log n). */
-export function sortKeeperRows(rows: readonly KeeperCandidate[], key: KeeperSortKey, dir: SortDirection): KeeperCandidate[] {
-  const value = (c: KeeperCandidate): number | string | null => {
-    if (key === 'rank') return c.rank;
-    if (key === 'earId') return c.animal.earId;
-    if (key === 'projected') return c.projectedSeniorWeight?.grams ?? null;
-    return partOf(c, key)?.contribution ?? 0;
-  };
-  return sortRows(rows, value, dir);
-}
+/** The board's sortable columns; ties (and a cleared sort) keep the rank order. */
+export const KEEPER_SORT: SortKeys<KeeperCandidate> = {
+  rank: (c) => c.rank,
+  earId: (c) => c.animal.earId,
+  projected: (c) => c.projectedSeniorWeight?.grams ?? null,
+  ...Object.fromEntries(KEEPER_COMPONENTS.map((k) => [k, (c: KeeperCandidate) => partOf(c, k)?.contribution ?? 0])),
+};
 
 /** The board as a file: every number of the chart and the table, with the explanation. */
 export function keeperCsvColumns(

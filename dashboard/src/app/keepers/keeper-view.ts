@@ -1,4 +1,5 @@
 import { KEEPER_COMPONENTS, KeepersQuery, TraitKey, type KeeperComponent } from '@shared/contracts/analytics';
+import { queryValue, type QueryParams } from '../panels/query-view';
 
 /** What the keeper board shows: the trait of the breeding value and each component's weight. */
 export interface KeeperView {
@@ -20,9 +21,9 @@ export const KEEPER_WEIGHT_RANGE = { min: 0, max: 5, step: 0.5 } as const;
  * "weightOnTarget:3,inbreeding:0"), read with the API's schema; anything the API would refuse
  * falls back to the default for that key, and weights are held within the sliders' range. O(k).
  */
-export function keeperViewFrom(params: Record<string, string | undefined>): KeeperView {
-  const trait = TraitKey.safeParse(params['trait'] ?? '');
-  const weights = KeepersQuery.shape.weights.safeParse(params['weights'] || undefined);
+export function keeperViewFrom(params: QueryParams): KeeperView {
+  const trait = TraitKey.safeParse(queryValue(params, 'trait') ?? '');
+  const weights = KeepersQuery.shape.weights.safeParse(queryValue(params, 'weights') || undefined);
   const given = weights.success ? (weights.data ?? {}) : {};
   const clamp = (w: number) => Math.min(KEEPER_WEIGHT_RANGE.max, Math.max(KEEPER_WEIGHT_RANGE.min, w));
   return {

@@ -1,10 +1,8 @@
 import { httpResource } from '@angular/common/http';
 import { Injectable } from '@angular/core';
 import { KeepersReport } from '@shared/contracts/analytics';
+import { analyticsUrl } from '../panels/analytics-url';
 import { keeperParams, type KeeperView } from './keeper-view';
-
-export const analyticsUrl = (rabbitryId: string, report: string) =>
-  `/api/rabbitries/${encodeURIComponent(rabbitryId)}/analytics/${report}`;
 
 /** The keeper board's read; decisions are written through the animal's own API (AnimalApi). */
 @Injectable({ providedIn: 'root' })

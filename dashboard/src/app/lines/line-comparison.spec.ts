@@ -1,17 +1,18 @@
 import { provideHttpClient } from '@angular/common/http';
+import { LINE_CAUTIONS } from '@shared/domain/cautions';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { By } from '@angular/platform-browser';
 import { provideRouter, Router } from '@angular/router';
 import type { LinesReport } from '@shared/contracts/analytics';
 import { signInAs, userWith } from '../session/test-users';
-import { stubChartEnvironment } from './chart-stubs';
+import { stubChartEnvironment } from '../panels/chart-stubs';
 import { LineComparison } from './line-comparison';
-import { PanelChart } from './panel-chart';
+import { PanelChart } from '../panels/panel-chart';
 
 const summary = (n: number, median: number) => ({ n, min: median - 40, q1: median - 20, median, q3: median + 20, max: median + 40, mean: median + 1 });
 const interval = (n: number, lower: number, upper: number) => ({ lower, upper, lowerRank: 2, upperRank: n - 1, coverage: 0.96, n });
-const CAUTIONS = ['A line’s figures also carry how its animals were fed, housed and shown; compare lines kept alike.'];
+const CAUTIONS = [...LINE_CAUTIONS];
 const report: LinesReport = {
   scope: { kind: 'rabbitry', rabbitries: [{ id: 7, name: 'Brackenrow' }], description: 'Brackenrow only.' },
   asOf: '2026-12-01',
@@ -65,7 +66,7 @@ describe('LineComparison', { timeout: 20_000 }, () => {
       ['Placement score per show resultscore (0 = last, 1 = won)', 'Slate', '0 no records', '—', '—', '—', '—', '—', '—'],
     ]);
     expect(el.textContent).toContain('1 group has fewer than 10 animals');
-    expect(el.querySelector('kl-caution-note')?.textContent).toContain(CAUTIONS[0]);
+    expect(el.querySelector('kl-cautions-note')?.textContent).toContain(LINE_CAUTIONS[0]);
   });
 
   it('asks the API for the breed, sex and birth dates the address holds, and says them', async () => {

@@ -1,5 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -8,20 +7,20 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
-import { map } from 'rxjs';
+import { LINE_CAUTIONS } from '@shared/domain/cautions';
 import { BreedsApi } from '../breeds/breeds-api';
-import { CautionNote } from '../pairing/caution-note';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { LoadError } from '../status/load-error';
 import { buildLineBoxplotOptions, formatMeasure } from './lines-chart-options';
 import { LinesApi } from './lines-api';
 import { LINE_SORT, lineCsv, lineRows, medianIntervalText } from './lines-table';
 import { linesApiParams, linesParams, linesViewFrom, MIN_N_CHOICES, type LinesView } from './lines-view';
-import { PanelChart } from './panel-chart';
-import { readPanelTheme, type PanelTheme } from './panel-theme';
-import { sortRows, type RowOrder } from './sort-rows';
 
 /** Line comparison: the herd's lines (or the rabbitries the user may see) side by side as box plots of each measure. */
 @Component({
@@ -38,7 +37,7 @@ import { sortRows, type RowOrder } from './sort-rows';
     MatSelectModule,
     MatSortModule,
     MatTableModule,
-    CautionNote,
+    CautionsNote,
     LoadError,
     PanelChart,
   ],
@@ -46,24 +45,16 @@ import { sortRows, type RowOrder } from './sort-rows';
 })
 export class LineComparison {
   private readonly api = inject(LinesApi);
-  private readonly route = inject(ActivatedRoute);
-  private readonly router = inject(Router);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => linesViewFrom(p))), {
-    initialValue: linesViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(linesViewFrom, linesParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.report(this.rabbitryId, () => linesApiParams(this.view()));
-  protected readonly data = computed(() => (this.report.hasValue() ? this.report.value() : undefined));
-  /** The report's cautions (the API's breeding cautions), kept in view while the next filters load. */
-  protected readonly cautions = linkedSignal<readonly string[] | undefined, readonly string[]>({
-    source: () => this.data()?.cautions,
-    computation: (next, previous) => next ?? previous?.value ?? [],
-  });
+  protected readonly data = lastValue(this.report);
+  protected readonly cautions = LINE_CAUTIONS;
   protected readonly breeds = inject(BreedsApi).list();
-  protected readonly filtersSet = computed(() => ['breed', 'sex', 'from', 'to'].some((k) => this.view()[k] !== undefined));
+  protected readonly filtersSet = computed(() => (['breed', 'sex', 'from', 'to'] as const).some((k) => this.view()[k] !== undefined));
   protected readonly minNChoices = MIN_N_CHOICES;
   protected readonly format = formatMeasure;
   protected readonly intervalText = medianIntervalText;
@@ -76,9 +67,7 @@ export class LineComparison {
   });
   protected readonly single = computed(() => this.measures().length === 1);
 
-  private theme: PanelTheme | null = null;
-  private readonly themed = () => (this.theme ??= readPanelTheme(this.host));
-  protected readonly background = computed(() => this.themed().surface);
+  private readonly themed = injectChartTheme();
   protected readonly charts = computed(() => {
     const r = this.data();
     if (!r) return [];
@@ -98,7 +87,7 @@ export class LineComparison {
   protected readonly noAnimals = computed(() => (this.data()?.groups.length ?? 0) === 0);
 
   protected setView(change: Partial<LinesView>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: linesParams({ ...this.view(), ...change }) });
+    this.address.show({ ...this.view(), ...change });
   }
 
   protected filter(key: 'breed' | 'sex' | 'from' | 'to', value: string | number | undefined): void {

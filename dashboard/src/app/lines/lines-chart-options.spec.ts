@@ -1,8 +1,8 @@
 import type { LinesReport } from '@shared/contracts/analytics';
 import './lines-echarts';
-import { renderSvg } from './chart-stubs';
+import { renderSvg } from '../panels/chart-stubs';
 import { buildLineBoxplotOptions, countLabel, formatMeasure, type LineMeasure } from './lines-chart-options';
-import { PLAIN_THEME } from './panel-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 
 const groups: LinesReport['groups'] = [
   { key: 'Ember', label: 'Ember', animals: 146 },
@@ -20,7 +20,7 @@ const measure: LineMeasure = {
   ],
 };
 type Box = { data: { value: number[]; itemStyle?: { borderType?: string } }[] };
-const options = () => buildLineBoxplotOptions({ measure, groups, theme: PLAIN_THEME });
+const options = () => buildLineBoxplotOptions({ measure, groups, theme: DEFAULT_CHART_THEME });
 
 describe('buildLineBoxplotOptions', () => {
   it('draws each group’s five-number summary in ECharts’ boxplot order: min, Q1, median, Q3, max', () => {
@@ -42,7 +42,7 @@ describe('buildLineBoxplotOptions', () => {
 
   it('names the value axis by the unit and keeps percentiles on 0–100', () => {
     expect(options()['yAxis']).toMatchObject({ name: 'percentile', min: 0, max: 100 });
-    const f = buildLineBoxplotOptions({ measure: { ...measure, unit: 'F' }, groups, theme: PLAIN_THEME });
+    const f = buildLineBoxplotOptions({ measure: { ...measure, unit: 'F' }, groups, theme: DEFAULT_CHART_THEME });
     expect(f['yAxis']).toMatchObject({ name: 'F', min: 0 });
   });
 

@@ -1,6 +1,6 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { DistributionSummary, LinesReport } from '@shared/contracts/analytics';
-import { axisStyle, type PanelTheme, tooltipStyle } from './panel-theme';
+import { axisStyle, chartBase, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
 
 /** By default groups with fewer values than this are marked small: their quartiles move with a few animals (the API warns below 10 too). */
 export const SMALL_GROUP = 10;
@@ -27,7 +27,7 @@ function axisRange(unit: string): { min?: number; max?: number } {
 export interface BoxplotInput {
   measure: LineMeasure;
   groups: readonly LineGroup[];
-  theme: PanelTheme;
+  theme: ChartTheme;
   /** Groups with fewer values are marked small. */
   minN?: number;
 }
@@ -52,9 +52,7 @@ export function buildLineBoxplotOptions(input: BoxplotInput): EChartsCoreOption 
   const rows = measure.groups.map((g) => ({ key: g.key, label: labelOf.get(g.key) ?? g.key, summary: g.summary, interval: g.medianInterval }));
   const axis = axisStyle(theme);
   return {
-    animation: false,
-    textStyle: { fontFamily: theme.font, color: theme.text },
-    aria: { enabled: true, label: { description: `Box plots of ${measure.label.toLowerCase()} for ${rows.length} groups.` } },
+    ...chartBase(theme, `Box plots of ${measure.label.toLowerCase()} for ${rows.length} groups.`),
     grid: { left: 8, right: 16, top: 36, bottom: 8 },
     tooltip: {
       trigger: 'item',

@@ -1,7 +1,7 @@
 import type { DistributionSummary } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
 import { formatMeasure, SMALL_GROUP, type LineGroup, type LineMeasure } from './lines-chart-options';
-import type { SortKeys } from './sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 
 /** One group's distribution of one measure: a row of the comparison table. */
 export interface LineRow {

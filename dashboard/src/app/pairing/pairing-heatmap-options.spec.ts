@@ -1,6 +1,6 @@
 import type { AnimalRef, PairingsReport } from '@shared/contracts/analytics';
-import { renderSvg } from '../lines/chart-stubs';
-import { PLAIN_THEME } from '../lines/panel-theme';
+import { renderSvg } from '../panels/chart-stubs';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import './pairing-echarts';
 import { buildPairingHeatmapOptions, heatmapSize, INBREEDING_RAMP } from './pairing-heatmap-options';
 
@@ -16,7 +16,7 @@ const matrix: PairingsReport['matrix'] = {
   totalDoes: 2, totalBucks: 2, truncated: false,
 };
 type Cell = { value: [number, number, number]; itemStyle?: { borderWidth: number }; label: { color: string } };
-const build = (selectedId: number | null = 1, wide = true) => buildPairingHeatmapOptions({ matrix, selectedId, theme: PLAIN_THEME, wide });
+const build = (selectedId: number | null = 1, wide = true) => buildPairingHeatmapOptions({ matrix, selectedId, theme: DEFAULT_CHART_THEME, wide });
 const cells = (o: ReturnType<typeof build>) => (o['series'] as { data: Cell[] }[])[0]!.data;
 
 describe('buildPairingHeatmapOptions', () => {
@@ -72,7 +72,7 @@ describe('buildPairingHeatmapOptions', () => {
 
   it('leaves the numbers out of a large grid, where the tooltip and the table give them', () => {
     const big = { ...matrix, bucks: Array.from({ length: 13 }, (_, i) => animal(10 + i, `B${i}`, 'buck')), values: [new Array(13).fill(0.1), new Array(13).fill(0.2)] };
-    const o = buildPairingHeatmapOptions({ matrix: big, selectedId: null, theme: PLAIN_THEME, wide: true });
+    const o = buildPairingHeatmapOptions({ matrix: big, selectedId: null, theme: DEFAULT_CHART_THEME, wide: true });
     expect((o['series'] as { label: { show: boolean } }[])[0]!.label.show).toBe(false);
   });
 });

@@ -1,6 +1,6 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { AnimalRef, PairingsReport } from '@shared/contracts/analytics';
-import { axisStyle, type PanelTheme, tooltipStyle } from '../lines/panel-theme';
+import { axisStyle, chartBase, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
 import { formatInbreeding, INBREEDING_BANDS, type InbreedingBand, inbreedingBand } from './inbreeding-bands';
 
 /**
@@ -20,7 +20,7 @@ export interface PairingHeatmapInput {
   matrix: PairingsReport['matrix'];
   /** The animal being planned for: its row or column is outlined and its name marked. */
   selectedId: number | null;
-  theme: PanelTheme;
+  theme: ChartTheme;
   /** A wide screen keeps the legend beside the grid; a narrow one stacks it below. */
   wide: boolean;
 }
@@ -86,9 +86,7 @@ export function buildPairingHeatmapOptions(input: PairingHeatmapInput): EChartsC
   });
   const axis = axisStyle(theme);
   return {
-    animation: false,
-    textStyle: { fontFamily: theme.font, color: theme.text },
-    aria: { enabled: true, label: { description: `Expected inbreeding of the offspring of ${matrix.does.length} does and ${matrix.bucks.length} bucks.` } },
+    ...chartBase(theme, `Expected inbreeding of the offspring of ${matrix.does.length} does and ${matrix.bucks.length} bucks.`),
     grid: { left: 8, right: input.wide ? LEGEND_WIDTH : 16, top: 24, bottom: input.wide ? 8 : LEGEND_HEIGHT },
     tooltip: {
       ...tooltipStyle(theme),

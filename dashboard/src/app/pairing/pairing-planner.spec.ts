@@ -4,8 +4,9 @@ import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { By } from '@angular/platform-browser';
 import { provideRouter, Router } from '@angular/router';
 import type { AnimalRef, PairingsReport, RelationshipReport } from '@shared/contracts/analytics';
-import { stubChartEnvironment } from '../lines/chart-stubs';
-import { PanelChart } from '../lines/panel-chart';
+import { BREEDING_CAUTIONS } from '@shared/domain/cautions';
+import { stubChartEnvironment } from '../panels/chart-stubs';
+import { PanelChart } from '../panels/panel-chart';
 import { signInAs, userWith } from '../session/test-users';
 import { PairingPlanner } from './pairing-planner';
 
@@ -17,7 +18,7 @@ const ivy = ref(151, 'BF143', 'buck', 'Ivy II');
 const cobble = ref(126, 'BF118', 'buck', 'Cobble II');
 const sorrel = ref(140, 'BF132', 'doe', 'Sorrel', { line: 'Slate' });
 const aster = ref(64, 'BF056', 'doe', 'Aster', { status: 'sold' });
-const CAUTIONS = ['Inbreeding tends to bring smaller litters and to intensify faults as well as virtues; line-breed with care.'];
+const CAUTIONS = [...BREEDING_CAUTIONS];
 
 const report: PairingsReport = {
   scope: { kind: 'rabbitry', rabbitries: [{ id: 7, name: 'Brackenrow' }], description: 'Brackenrow only.' },
@@ -73,7 +74,7 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     await fixture.whenStable();
     backend.expectNone((r) => r.url.includes('/analytics/'));
     expect(el.querySelector('.kl-note h2')?.textContent).toBe('Choose a doe or a buck to begin');
-    expect(el.querySelector('kl-caution-note')?.textContent).toContain('smaller litters');
+    expect(el.querySelector('kl-cautions-note')?.textContent).toContain('smaller litters');
   });
 
   it('lists the mates with the litter’s inbreeding, breeding values and the ancestors behind it', async () => {
@@ -85,11 +86,11 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     await fixture.whenStable();
     expect(el.querySelector('.summary')?.textContent?.replace(/\s+/g, ' ')).toContain('Planning for BF100 Lark (doe, Mini Rex, Ember line), breeding value −0.12 SD (accuracy 0.41) for weight at 12 weeks.');
     expect(rows()).toEqual([
-      ['1', 'BF118Cobble II · Blue', 'Ember', '16 months', '2.3 %less than first cousins', '+0.23 SD', '0.54', '+0.05 SD', 'Distant (under 1/32)'],
-      ['2', 'BF143Ivy II · Blue', 'Ember', '16 months', '30.5 %as close as full sibs or parent × offspring', '+0.32 SD', '—', '+0.10 SD',
+      ['1', 'BF118Cobble II · Blue', '2.3 %less than first cousins', '+0.05 SD', '+0.23 SD', '0.54', 'Ember', '16 months', 'Distant (under 1/32)'],
+      ['2', 'BF143Ivy II · Blue', '30.5 %as close as full sibs or parent × offspring', '+0.10 SD', '+0.32 SD', '—', 'Ember', '16 months',
         'BF056 Aster 46 %, an unrecorded ancestor 21 % High expected inbreeding: as close as a half-sib mating or closer.'],
     ]);
-    expect(el.querySelector('kl-caution-note')?.textContent).toContain(CAUTIONS[0]);
+    expect(el.querySelector('kl-cautions-note')?.textContent).toContain(BREEDING_CAUTIONS[0]);
   });
 
   it('sorts the mates by a column the breeder chooses', async () => {
@@ -158,15 +159,5 @@ describe('PairingPlanner', { timeout: 20_000 }, () => {
     pairingsRequest().flush(report);
     await fixture.whenStable();
     expect(rows()).toHaveLength(2);
-  });
-
-  it('keeps the cautions put away once the breeder hides them', async () => {
-    await open('/');
-    await fixture.whenStable();
-    [...el.querySelectorAll('button')].find((b) => b.textContent?.trim() === 'Hide these cautions')!.click();
-    await fixture.whenStable();
-    expect(el.querySelector('kl-caution-note aside')).toBeNull();
-    expect(localStorage.getItem('kl.cautions-hidden.pairing')).toBe('1');
-    expect(el.querySelector('kl-caution-note button')?.textContent?.trim()).toBe('Show the breeding cautions');
   });
 });

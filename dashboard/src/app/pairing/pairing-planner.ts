@@ -1,7 +1,6 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { DecimalPipe, LowerCasePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, computed, effect, inject, input, signal } from '@angular/core';
-import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatAutocompleteModule, MatAutocompleteSelectedEvent } from '@angular/material/autocomplete';
 import { MatButtonModule } from '@angular/material/button';
@@ -11,33 +10,30 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import type { ECElementEvent } from 'echarts/core';
 import { provideEchartsCore } from 'ngx-echarts';
-import { debounceTime, map } from 'rxjs';
+import { debounceTime } from 'rxjs';
 import type { HerdRow } from '@shared/contracts/animals';
 import type { AnimalRef } from '@shared/contracts/analytics';
+import { BREEDING_CAUTIONS } from '@shared/domain/cautions';
 import { SEX_LABELS } from '@shared/domain/terms';
 import { BreedsApi } from '../breeds/breeds-api';
-import { PanelChart } from '../lines/panel-chart';
-import { readPanelTheme, type PanelTheme } from '../lines/panel-theme';
-import { sortRows, type RowOrder } from '../lines/sort-rows';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { mediaMatches } from '../panels/media-query';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
+import { traitChoices } from '../panels/trait-choices';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { describeAge } from '../records/describe-age';
 import { LoadError } from '../status/load-error';
-import { CautionNote } from './caution-note';
 import { formatInbreeding, inbreedingBand, INBREEDING_BANDS } from './inbreeding-bands';
 import { PairingApi } from './pairing-api';
 import { animalLabel, buildPairingHeatmapOptions, heatmapSize, INBREEDING_RAMP } from './pairing-heatmap-options';
 import { ancestorsText, CANDIDATE_CSV, CANDIDATE_SORT, formatAccuracy, formatEbv, GRID_CSV, gridCells } from './pairing-table';
-import { PAIRING_LIMITS, pairingParams, pairingViewFrom, traitChoices, type PairingView } from './pairing-view';
-
-/** Shown before any report has come, so the note is there from the first look. */
-const STANDING_CAUTIONS = [
-  'Close breeding tends to bring smaller litters and to make faults stronger as well as virtues.',
-  'Breed a doe only once she is old and big enough for her breed; a veterinarian answers health questions.',
-  'These figures support your judgment; they do not replace a judge, the official breed standard or a veterinarian.',
-];
+import { PAIRING_LIMITS, pairingParams, pairingViewFrom, type PairingView } from './pairing-view';
 
 /**
  * Pairing planner: a doe or buck of the herd, its possible mates ranked by the expected
@@ -62,7 +58,7 @@ const STANDING_CAUTIONS = [
     MatSelectModule,
     MatSortModule,
     MatTableModule,
-    CautionNote,
+    CautionsNote,
     LoadError,
     PanelChart,
   ],
@@ -70,15 +66,12 @@ const STANDING_CAUTIONS = [
 })
 export class PairingPlanner {
   private readonly api = inject(PairingApi);
-  private readonly route = inject(ActivatedRoute);
-  private readonly router = inject(Router);
   private readonly host: HTMLElement = inject(ElementRef).nativeElement;
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => pairingViewFrom(p))), {
-    initialValue: pairingViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(pairingViewFrom, pairingParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.pairings(this.rabbitryId, this.view);
   protected readonly breeds = inject(BreedsApi).list();
 
@@ -86,34 +79,33 @@ export class PairingPlanner {
   private readonly searchText = signal('');
   protected readonly matches = this.api.animalsMatching(this.rabbitryId, this.searchText);
 
-  protected readonly data = computed(() => (this.report.hasValue() ? this.report.value() : undefined));
+  protected readonly data = lastValue(this.report);
   protected readonly planned = computed(() => this.data()?.animal ?? null);
   protected readonly traits = computed(() =>
     traitChoices(this.breeds.hasValue() ? this.breeds.value() : [], this.planned()?.animal.breedId ?? null),
   );
   protected readonly traitLabel = computed(() => this.data()?.trait.label ?? this.traits().find((t) => t.key === this.view().trait)?.label ?? this.view().trait);
   protected readonly limits = PAIRING_LIMITS;
-  protected readonly cautions = computed(() => this.data()?.cautions ?? STANDING_CAUTIONS);
+  protected readonly cautions = BREEDING_CAUTIONS;
 
   protected readonly order = signal<RowOrder>({ active: 'rank', direction: 'asc' });
   protected readonly candidates = computed(() => sortRows(this.data()?.candidates ?? [], this.order(), CANDIDATE_SORT));
-  protected readonly columns = ['rank', 'mate', 'line', 'age', 'inbreeding', 'mateEbv', 'mateAccuracy', 'offspringEbv', 'ancestors'];
+  // The litter's inbreeding and value come right after the mate: on a phone they stay in view.
+  protected readonly columns = ['rank', 'mate', 'inbreeding', 'offspringEbv', 'mateEbv', 'mateAccuracy', 'line', 'age', 'ancestors'];
   protected readonly mateWord = computed(() => (this.planned()?.animal.sex === 'buck' ? 'does' : 'bucks'));
 
-  // The theme is read when the first chart is drawn: only an element in the page inherits the variables.
-  private theme: PanelTheme | null = null;
-  private readonly wide = toSignal(inject(BreakpointObserver).observe('(min-width: 700px)').pipe(map((s) => s.matches)), { initialValue: true });
+  private readonly theme = injectChartTheme();
+  private readonly wide = mediaMatches('(min-width: 700px)', true);
   protected readonly heatmap = computed(() => {
     const report = this.data();
     if (!report || report.matrix.does.length === 0 || report.matrix.bucks.length === 0) return null;
     const wide = this.wide();
-    const options = buildPairingHeatmapOptions({ matrix: report.matrix, selectedId: report.animal.animal.id, theme: (this.theme ??= readPanelTheme(this.host)), wide });
+    const options = buildPairingHeatmapOptions({ matrix: report.matrix, selectedId: report.animal.animal.id, theme: this.theme(), wide });
     return { options, size: heatmapSize(report.matrix.does.length, report.matrix.bucks.length, wide) };
   });
   protected readonly grid = computed(() => (this.data() ? gridCells(this.data()!.matrix) : []));
   protected readonly bandsText = () => INBREEDING_BANDS.map((b) => `${b.label}: ${b.likeness}`).join('; ');
   protected readonly bands = INBREEDING_BANDS.map((b) => ({ ...b, colour: INBREEDING_RAMP[b.index] }));
-  protected readonly background = computed(() => (this.theme ??= readPanelTheme(this.host)).surface);
 
   /** The heatmap cell asked about, and what the API says of that pair. */
   protected readonly pair = signal<{ doe: AnimalRef; buck: AnimalRef; f: number } | null>(null);
@@ -195,6 +187,6 @@ export class PairingPlanner {
   }
 
   private show(view: PairingView): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: pairingParams(view), replaceUrl: false });
+    this.address.show(view, true);
   }
 }

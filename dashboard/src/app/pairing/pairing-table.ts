@@ -1,6 +1,6 @@
 import type { CommonAncestor, PairingsReport } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
-import type { SortKeys } from '../lines/sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 import { formatInbreeding, inbreedingBand } from './inbreeding-bands';
 import { animalLabel } from './pairing-heatmap-options';
 

@@ -7,8 +7,8 @@ import type { SeasonReport } from '@shared/contracts/analytics';
 import type { Club } from '@shared/contracts/clubs';
 import type { ClubRole } from '@shared/contracts/roles';
 import { validateAsYouType } from '../forms/validate-as-you-type';
-import { stubChartEnvironment } from '../lines/chart-stubs';
-import { PanelChart } from '../lines/panel-chart';
+import { stubChartEnvironment } from '../panels/chart-stubs';
+import { PanelChart } from '../panels/panel-chart';
 import { signInAs, userWith } from '../session/test-users';
 import { ClubSeason } from './club-season';
 

@@ -1,7 +1,5 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -10,14 +8,17 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import { provideEchartsCore } from 'ngx-echarts';
-import { map } from 'rxjs';
 import { IsoDate } from '@shared/contracts/animals';
+import { SHOW_CAUTIONS } from '@shared/domain/cautions';
 import { ClubsApi } from '../club/clubs-api';
-import { PanelChart } from '../lines/panel-chart';
-import { readPanelTheme, type PanelTheme } from '../lines/panel-theme';
-import { sortRows, type RowOrder } from '../lines/sort-rows';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { mediaMatches } from '../panels/media-query';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { clubRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
@@ -54,6 +55,7 @@ const FEW_ENTRIES = 10;
     MatSelectModule,
     MatSortModule,
     MatTableModule,
+    CautionsNote,
     Counts,
     LoadError,
     PanelChart,
@@ -63,20 +65,17 @@ const FEW_ENTRIES = 10;
 })
 export class ClubSeason {
   private readonly api = inject(SeasonApi);
-  private readonly route = inject(ActivatedRoute);
-  private readonly router = inject(Router);
   private readonly session = inject(Session);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
 
   readonly clubId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => seasonViewFrom(p))), {
-    initialValue: seasonViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(seasonViewFrom, seasonParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.report(this.clubId, () => ({ from: this.view().from, to: this.view().to }));
   protected readonly club = inject(ClubsApi).one(this.clubId);
   protected readonly isOfficer = computed(() => clubRoleOf(this.session.user(), this.clubId()) === 'officer');
-  protected readonly data = computed(() => (this.report.hasValue() ? this.report.value() : undefined));
+  protected readonly data = lastValue(this.report);
+  protected readonly cautions = SHOW_CAUTIONS;
   protected readonly isEmpty = computed(() => this.data()?.totals.results === 0);
   protected readonly showEditor = signal(false);
 
@@ -108,12 +107,10 @@ export class ClubSeason {
       : ['rank', 'exhibitor', 'breed', 'points', 'results', 'firsts', 'awards'],
   );
 
-  // ---- charts; the theme is read at the first drawing, when the page's variables reach this element
-  private theme: PanelTheme | null = null;
-  private readonly themed = () => (this.theme ??= readPanelTheme(this.host));
-  protected readonly background = computed(() => this.themed().surface);
+  // ---- charts
+  private readonly themed = injectChartTheme();
   protected readonly tops = SEASON_TOPS;
-  private readonly wide = toSignal(inject(BreakpointObserver).observe('(min-width: 900px)').pipe(map((s) => s.matches)), { initialValue: true });
+  private readonly wide = mediaMatches('(min-width: 900px)', true);
   protected readonly pointsHeight = computed(() => (this.wide() ? '24rem' : '30rem'));
   protected readonly pointsOptions = computed(() => {
     const r = this.data();
@@ -128,7 +125,7 @@ export class ClubSeason {
   protected readonly dates = computed(() => this.data()?.cumulative.dates ?? []);
   protected readonly entriesOptions = computed(() => {
     const r = this.data();
-    return r && r.entries.shows.length > 0 ? buildEntriesOptions({ entries: r.entries, theme: this.themed() }) : null;
+    return r && r.entries.shows.length > 0 ? buildEntriesOptions({ entries: r.entries, theme: this.themed(), wide: this.wide() }) : null;
   });
 
   // ---- legs and sires
@@ -143,7 +140,7 @@ export class ClubSeason {
   protected readonly indexText = indexText;
 
   protected setView(change: Partial<SeasonView>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: seasonParams({ ...this.view(), ...change }) });
+    this.address.show({ ...this.view(), ...change });
   }
 
   /** A date typed in the range box: a complete date applies at once; an empty box returns to the club's season. */

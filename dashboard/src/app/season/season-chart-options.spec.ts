@@ -1,6 +1,6 @@
 import type { SeasonReport } from '@shared/contracts/analytics';
-import { renderSvg } from '../lines/chart-stubs';
-import { PLAIN_THEME } from '../lines/panel-theme';
+import { renderSvg } from '../panels/chart-stubs';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildEntriesOptions, buildSeasonPointsOptions, pointsSeriesShown, shortDate } from './season-chart-options';
 import './season-echarts';
 
@@ -21,7 +21,7 @@ const shows = [
 type Line = { name: string; data: number[]; lineStyle: { type: string }; symbol: string };
 
 describe('buildSeasonPointsOptions', () => {
-  const build = (top = 8, who: 'all' | 'members' = 'all') => buildSeasonPointsOptions({ cumulative, shows, top, who, theme: PLAIN_THEME, wide: true });
+  const build = (top = 8, who: 'all' | 'members' = 'all') => buildSeasonPointsOptions({ cumulative, shows, top, who, theme: DEFAULT_CHART_THEME, wide: true });
 
   it('draws one line per exhibitor, most points at the end first, members solid and others dashed', () => {
     const series = build()['series'] as Line[];
@@ -41,7 +41,7 @@ describe('buildSeasonPointsOptions', () => {
     expect(o['xAxis']).toMatchObject({ name: 'Show date', data: ['Jan 17', 'Feb 14', 'Mar 14'] });
     expect(o['yAxis']).toMatchObject({ name: 'Points so far' });
     expect(o['legend']).toMatchObject({ type: 'scroll', orient: 'vertical', right: 0 });
-    const narrow = buildSeasonPointsOptions({ cumulative, shows, top: 8, who: 'all', theme: PLAIN_THEME, wide: false });
+    const narrow = buildSeasonPointsOptions({ cumulative, shows, top: 8, who: 'all', theme: DEFAULT_CHART_THEME, wide: false });
     expect(narrow['legend']).toMatchObject({ type: 'plain', orient: 'horizontal', top: 0 });
     expect((narrow['grid'] as { top: number }).top).toBeGreaterThan((o['grid'] as { top: number }).top);
   });
@@ -67,7 +67,7 @@ describe('buildEntriesOptions', () => {
     counts: [[37, 72], [41, 47]],
     byBreed: [{ breed: 'Californian', entries: 78 }, { breed: 'Mini Rex', entries: 119 }],
   };
-  const build = () => buildEntriesOptions({ entries, theme: PLAIN_THEME });
+  const build = (wide = true) => buildEntriesOptions({ entries, theme: DEFAULT_CHART_THEME, wide });
 
   it('stacks one bar series per breed over the shows', () => {
     const series = build()['series'] as { name: string; stack: string; data: number[] }[];
@@ -76,12 +76,18 @@ describe('buildEntriesOptions', () => {
   });
 
   it('lays patterns on the bars as well as hues, and totals a show in the tooltip', () => {
-    expect(build()['aria']).toEqual({ enabled: true, decal: { show: true } });
+    expect(build()['aria']).toMatchObject({ enabled: true, decal: { show: true } });
     const tooltip = build()['tooltip'] as { formatter: (p: unknown[]) => string };
     expect(tooltip.formatter([
       { dataIndex: 0, seriesName: 'Californian', value: 37, marker: '•' },
       { dataIndex: 0, seriesName: 'Mini Rex', value: 72, marker: '•' },
     ])).toBe('<b>Winter Show</b> 2026-01-17<br>• Californian: 37<br>• Mini Rex: 72<br>Total: 109 entries');
+  });
+
+  it('pages the legend on a wide screen and shows every breed above the bars on a narrow one', () => {
+    expect(build()['legend']).toMatchObject({ type: 'scroll' });
+    expect(build(false)['legend']).toMatchObject({ type: 'plain' });
+    expect((build(false)['grid'] as { top: number }).top).toBeGreaterThanOrEqual(56);
   });
 
   it('draws as SVG with the breeds in the legend', () => {

@@ -1,6 +1,6 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { SeasonReport } from '@shared/contracts/analytics';
-import { axisStyle, type PanelTheme, tooltipStyle } from '../lines/panel-theme';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
 
 /** Marker shapes cycled with the hues, so two lines of like colour still differ. */
 const SYMBOLS = ['circle', 'rect', 'triangle', 'diamond', 'roundRect', 'pin', 'arrow'];
@@ -15,7 +15,7 @@ export interface PointsChartInput {
   shows: SeasonReport['entries']['shows'];
   top: number;
   who: 'all' | 'members';
-  theme: PanelTheme;
+  theme: ChartTheme;
   /** A wide screen has room for the legend beside the plot; a narrow one scrolls it above. */
   wide: boolean;
 }
@@ -43,14 +43,11 @@ export function buildSeasonPointsOptions(input: PointsChartInput): EChartsCoreOp
   for (const s of input.shows) showsOn.set(s.date, [...(showsOn.get(s.date) ?? []), s.name]);
   const axis = axisStyle(theme);
   return {
-    animation: false,
-    color: [...theme.series],
-    textStyle: { fontFamily: theme.font, color: theme.text },
-    aria: { enabled: true },
+    ...chartBase(theme, `Points summed after each show for ${shown.length} exhibitors, the leaders first.`),
     // Wide: a column beside the plot (scrolling past 25 names). Narrow: every name, wrapped two to a row above it.
     legend: input.wide
-      ? { type: 'scroll', orient: 'vertical', right: 0, top: 'middle', textStyle: { color: theme.text, fontFamily: theme.font }, pageTextStyle: { color: theme.muted } }
-      : { type: 'plain', orient: 'horizontal', left: 0, top: 0, itemGap: 8, textStyle: { color: theme.text, fontFamily: theme.font } },
+      ? { type: 'scroll', orient: 'vertical', right: 0, top: 'middle', ...legendStyle(theme) }
+      : { type: 'plain', orient: 'horizontal', left: 0, top: 0, itemGap: 8, ...legendStyle(theme) },
     grid: input.wide ? { left: 8, right: 200, top: 40, bottom: 8 } : { left: 8, right: 16, top: 40 + 24 * Math.ceil(shown.length / 2), bottom: 8 },
     tooltip: {
       trigger: 'axis',
@@ -88,7 +85,9 @@ export function buildSeasonPointsOptions(input: PointsChartInput): EChartsCoreOp
 
 export interface EntriesChartInput {
   entries: SeasonReport['entries'];
-  theme: PanelTheme;
+  theme: ChartTheme;
+  /** A wide screen pages a long legend in one row; a narrow one shows every breed, two to a row. */
+  wide: boolean;
 }
 
 /**
@@ -100,12 +99,9 @@ export function buildEntriesOptions(input: EntriesChartInput): EChartsCoreOption
   const { entries, theme } = input;
   const axis = axisStyle(theme);
   return {
-    animation: false,
-    color: [...theme.series],
-    textStyle: { fontFamily: theme.font, color: theme.text },
-    aria: { enabled: true, decal: { show: true } },
-    legend: { type: 'scroll', top: 0, textStyle: { color: theme.text, fontFamily: theme.font } },
-    grid: { left: 8, right: 16, top: 56, bottom: 8 },
+    ...chartBase(theme, `Entries at ${entries.shows.length} shows, stacked by breed.`, true),
+    legend: input.wide ? { type: 'scroll', top: 0, ...legendStyle(theme) } : { type: 'plain', top: 0, left: 0, itemGap: 8, ...legendStyle(theme) },
+    grid: { left: 8, right: 16, top: input.wide ? 56 : 32 + 24 * Math.ceil(entries.breeds.length / 2), bottom: 8 },
     tooltip: {
       trigger: 'axis',
       axisPointer: { type: 'shadow' },

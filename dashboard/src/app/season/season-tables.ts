@@ -1,6 +1,6 @@
 import type { SeasonReport, Standing } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
-import type { SortKeys } from '../lines/sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 
 export type LegsRow = SeasonReport['legs'][number];
 export type SireRow = SeasonReport['topSires'][number];

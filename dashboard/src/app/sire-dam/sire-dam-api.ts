@@ -1,7 +1,7 @@
 import { httpResource } from '@angular/common/http';
 import { Injectable } from '@angular/core';
 import { PlacementReport } from '@shared/contracts/analytics';
-import { analyticsUrl } from '../keepers/keepers-api';
+import { analyticsUrl } from '../panels/analytics-url';
 import { sireDamParams, type SireDamView } from './sire-dam-view';
 
 /** Placement of parents' offspring at shows. */

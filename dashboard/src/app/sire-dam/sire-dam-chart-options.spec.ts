@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from '../keepers/chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildSireDamOptions, parentLabel, sireDamChartHeight } from './sire-dam-chart-options';
 import { parent, placementReport } from './sire-dam-fixtures';
 

@@ -1,7 +1,7 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { ParentPlacement, PlacementReport } from '@shared/contracts/analytics';
-import { axisStyle, chartBase, type ChartTheme } from '../keepers/chart-theme';
-import { intervalLegend, intervalSeries } from '../keepers/interval-series';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
+import { intervalLegend, intervalSeries } from '../panels/interval-series';
 import { indexText } from './sire-dam-table';
 
 export interface SireDamChartInput {
@@ -51,14 +51,13 @@ export function buildSireDamOptions({ report, theme, maxRows = 30 }: SireDamChar
     ...chartBase(theme, `${words} ranked by how often their offspring placed in the top ${report.k}, with 95 % intervals; ${rows.length} of ${report.parents.length} shown.`),
     legend: {
       top: 0, left: 0,
-      textStyle: { color: theme.text, fontFamily: theme.font },
+      ...legendStyle(theme),
       data: [`Top-${report.k} share`, intervalLegend('95 % interval'), 'Shrunk toward herd'],
     },
     grid: { left: 8, right: 28, top: 56, bottom: 52 },
     tooltip: {
       trigger: 'item',
-      confine: true,
-      textStyle: { fontFamily: theme.font },
+      ...tooltipStyle(theme),
       formatter: (p: { dataIndex: number }) => (rows[p.dataIndex] ? tooltipFor(rows[p.dataIndex]!, report.k) : ''),
     },
     xAxis: {

@@ -1,6 +1,4 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal, signal, viewChild } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -9,23 +7,25 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import type { ECElementEvent } from 'echarts/core';
 import { provideEchartsCore } from 'ngx-echarts';
-import { map } from 'rxjs';
-import type { ParentPlacement, PlacementReport } from '@shared/contracts/analytics';
+import type { ParentPlacement } from '@shared/contracts/analytics';
+import { SELECTION_CAUTIONS } from '@shared/domain/cautions';
 import { BreedsApi } from '../breeds/breeds-api';
-import { CautionsNote } from '../keepers/cautions-note';
-import { readChartTheme } from '../keepers/chart-theme';
-import { PanelChart } from '../keepers/panel-chart';
-import type { SortDirection } from '../keepers/sort-rows';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { PHONE_WIDTH, mediaMatches } from '../panels/media-query';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
 import { LoadError } from '../status/load-error';
 import { SireDamApi } from './sire-dam-api';
 import { PARENT_WORDS, SMALL_SAMPLE, buildSireDamOptions, isSmall, sireDamChartHeight } from './sire-dam-chart-options';
-import { indexText, scoreText, shareText, sireDamCsvColumns, sortParents, type SireDamSortKey } from './sire-dam-table';
+import { PARENT_SORT, indexText, scoreText, shareText, sireDamCsvColumns } from './sire-dam-table';
 import { sireDamViewFrom, sireDamParams, withSireDamFilter, type SireDamView } from './sire-dam-view';
 
 const CHART_ROWS = 30;
@@ -43,22 +43,16 @@ const CHART_ROWS = 30;
 })
 export class SireDamReport {
   private readonly api = inject(SireDamApi);
-  private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
   private readonly session = inject(Session);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
-  private readonly chart = viewChild(PanelChart);
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => sireDamViewFrom(p))), {
-    initialValue: sireDamViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(sireDamViewFrom, sireDamParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.placement(this.rabbitryId, this.view);
-  protected readonly shown = linkedSignal<PlacementReport | undefined, PlacementReport | undefined>({
-    source: () => (this.report.hasValue() ? this.report.value() : undefined),
-    computation: (next, previous) => next ?? previous?.value,
-  });
+  protected readonly shown = lastValue(this.report);
+  protected readonly cautions = SELECTION_CAUTIONS;
 
   protected readonly breeds = inject(BreedsApi).list();
   protected readonly varieties = computed(() => {
@@ -67,20 +61,21 @@ export class SireDamReport {
     return [...new Set(chosen.flatMap((b) => b.varieties))].sort((a, b) => a.localeCompare(b));
   });
   protected readonly canEdit = computed(() => editsRecords(rabbitryRoleOf(this.session.user(), this.rabbitryId())));
-  protected readonly isPhone = toSignal(inject(BreakpointObserver).observe('(max-width: 600px)').pipe(map((s) => s.matches)), { initialValue: false });
+  protected readonly isPhone = mediaMatches(PHONE_WIDTH, false);
   protected readonly showFilters = signal(false);
 
-  private theme: ReturnType<typeof readChartTheme> | null = null;
+  private readonly theme = injectChartTheme();
   protected readonly options = computed(() => {
     const report = this.shown();
-    return report ? buildSireDamOptions({ report, theme: (this.theme ??= readChartTheme(this.host)), maxRows: CHART_ROWS }) : {};
+    return report ? buildSireDamOptions({ report, theme: this.theme(), maxRows: CHART_ROWS }) : {};
   });
   protected readonly chartRows = computed(() => Math.min(this.shown()?.parents.length ?? 0, CHART_ROWS));
   protected readonly chartHeight = computed(() => sireDamChartHeight(this.chartRows()));
 
-  private readonly sort = signal<Sort>({ active: 'rank', direction: '' });
-  protected readonly rows = computed(() => sortParents(this.shown()?.parents ?? [], this.sort().active as SireDamSortKey, this.sort().direction as SortDirection));
-  protected readonly columns = ['rank', 'earId', 'entries', 'offspring', 'share', 'shrunk', 'index', 'score', 'legs'];
+  private readonly sort = signal<RowOrder>({ active: 'rank', direction: '' });
+  protected readonly rows = computed(() => sortRows(this.shown()?.parents ?? [], this.sort(), PARENT_SORT));
+  // The share placed comes right after the parent: on a phone it stays in view.
+  protected readonly columns = ['rank', 'earId', 'share', 'entries', 'offspring', 'shrunk', 'index', 'score', 'legs'];
 
   protected readonly parentWords = PARENT_WORDS;
   protected readonly smallSample = SMALL_SAMPLE;
@@ -122,18 +117,17 @@ export class SireDamReport {
     return ['/r', p.parent.rabbitryId, 'animals', p.parent.id];
   }
 
+  protected readonly fileStem = computed(() => {
+    const report = this.shown();
+    return csvFileName(report ? PARENT_WORDS[report.parentKind] : 'parents', 'placement', report?.asOf).replace(/\.csv$/, '');
+  });
+
   protected saveCsv(): void {
     const report = this.shown();
-    if (!report) return;
-    downloadCsv(csvFileName(PARENT_WORDS[report.parentKind], 'placement', report.asOf), this.rows(), sireDamCsvColumns(report));
-  }
-
-  protected savePng(): void {
-    const report = this.shown();
-    void this.chart()?.savePng(csvFileName(report ? PARENT_WORDS[report.parentKind] : 'parents', 'placement', report?.asOf).replace(/\.csv$/, '.png'));
+    if (report) downloadCsv(`${this.fileStem()}.csv`, this.rows(), sireDamCsvColumns(report));
   }
 
   private show(view: SireDamView): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: sireDamParams(view), replaceUrl: true });
+    this.address.show(view);
   }
 }

@@ -1,6 +1,7 @@
 import { toCsv } from '@shared/csv/to-csv';
+import { sortRows } from '../panels/sort-rows';
 import { parent, placementReport } from './sire-dam-fixtures';
-import { indexText, scoreText, shareText, sireDamCsvColumns, sortParents } from './sire-dam-table';
+import { PARENT_SORT, indexText, scoreText, shareText, sireDamCsvColumns } from './sire-dam-table';
 
 describe('sire & dam table', () => {
   it('says each figure with its interval or standard error', () => {
@@ -15,8 +16,8 @@ describe('sire & dam table', () => {
 
   it('sorts by entries and by index, keeping the report’s rank for ties', () => {
     const rows = [parent(1, 'A', 1, 24, 22), parent(2, 'B', 2, 40, 30), parent(3, 'C', 3, 24, 10, { placementIndex: null })];
-    expect(sortParents(rows, 'entries', 'desc').map((p) => p.parent.earId)).toEqual(['B', 'A', 'C']);
-    expect(sortParents(rows, 'index', 'asc').map((p) => p.parent.earId)).toEqual(['A', 'B', 'C']);
+    expect(sortRows(rows, { active: 'entries', direction: 'desc' }, PARENT_SORT).map((p) => p.parent.earId)).toEqual(['B', 'A', 'C']);
+    expect(sortRows(rows, { active: 'index', direction: 'asc' }, PARENT_SORT).map((p) => p.parent.earId)).toEqual(['A', 'B', 'C']);
   });
 
   it('exports the numbers of every parent, dams named as dams', () => {

@@ -1,6 +1,6 @@
 import type { ParentPlacement, PlacementReport } from '@shared/contracts/analytics';
 import type { CsvColumn } from '@shared/csv/to-csv';
-import { sortRows, type SortDirection } from '../keepers/sort-rows';
+import type { SortKeys } from '../panels/sort-rows';
 
 const pct = (v: number) => `${(100 * v).toFixed(0)} %`;
 
@@ -27,23 +27,18 @@ export function scoreText(p: ParentPlacement): string {
   return s.se === null ? s.mean.toFixed(2) : `${s.mean.toFixed(2)} ± ${s.se.toFixed(2)}`;
 }
 
-export type SireDamSortKey = 'rank' | 'earId' | 'entries' | 'offspring' | 'share' | 'shrunk' | 'index' | 'score' | 'legs';
-
-/** The table in a column's order (the report's rank order when cleared). O(n log n). */
-export function sortParents(rows: readonly ParentPlacement[], key: SireDamSortKey, dir: SortDirection): ParentPlacement[] {
-  const value: Record<SireDamSortKey, (p: ParentPlacement) => number | string | null> = {
-    rank: (p) => p.rank,
-    earId: (p) => p.parent.earId,
-    entries: (p) => p.entries,
-    offspring: (p) => p.offspringShown,
-    share: (p) => p.topK.share,
-    shrunk: (p) => p.shrunkenShare,
-    index: (p) => p.placementIndex?.index ?? null,
-    score: (p) => p.meanPlacementScore?.mean ?? null,
-    legs: (p) => p.legs,
-  };
-  return sortRows(rows, value[key], dir);
-}
+/** The table's sortable columns (the report's rank order when cleared). */
+export const PARENT_SORT: SortKeys<ParentPlacement> = {
+  rank: (p) => p.rank,
+  earId: (p) => p.parent.earId,
+  entries: (p) => p.entries,
+  offspring: (p) => p.offspringShown,
+  share: (p) => p.topK.share,
+  shrunk: (p) => p.shrunkenShare,
+  index: (p) => p.placementIndex?.index ?? null,
+  score: (p) => p.meanPlacementScore?.mean ?? null,
+  legs: (p) => p.legs,
+};
 
 const round = (v: number | null | undefined, digits = 4) => (v === null || v === undefined ? null : Number(v.toFixed(digits)));
 

@@ -1,10 +1,10 @@
 import { PlacementQuery } from '@shared/contracts/analytics';
-import { queryParamsOf, queryViewFrom } from '../keepers/query-view';
+import { queryParamsOf, queryViewFrom, type QueryParams } from '../panels/query-view';
 
 /** The report's filters, kept in the address: the API's own placement query. */
 export type SireDamView = PlacementQuery;
 
-export const sireDamViewFrom = (params: Record<string, string | undefined>): SireDamView => queryViewFrom(PlacementQuery, params);
+export const sireDamViewFrom = (params: QueryParams): SireDamView => queryViewFrom(PlacementQuery, params);
 export const sireDamParams = (view: SireDamView): Record<string, string> => queryParamsOf(PlacementQuery, view);
 
 /** A filter changed; a new breed has other varieties, so the variety goes with it. */

@@ -1,4 +1,4 @@
-import { DEFAULT_CHART_THEME } from '../keepers/chart-theme';
+import { DEFAULT_CHART_THEME } from '../panels/chart-theme';
 import { buildEstimatesOptions, buildInheritanceScatterOptions, estimatesOf } from './trait-chart-options';
 import { heritabilityReport } from './trait-fixtures';
 

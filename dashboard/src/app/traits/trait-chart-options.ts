@@ -1,7 +1,7 @@
 import type { EChartsCoreOption } from 'echarts/core';
 import type { HeritabilityEstimate, HeritabilityReport } from '@shared/contracts/analytics';
-import { axisStyle, chartBase, type ChartTheme } from '../keepers/chart-theme';
-import { intervalLegend, intervalSeries } from '../keepers/interval-series';
+import { axisStyle, chartBase, legendStyle, tooltipStyle, type ChartTheme } from '../panels/chart-theme';
+import { intervalLegend, intervalSeries } from '../panels/interval-series';
 
 export const METHOD_LABELS: Record<HeritabilityEstimate['method'], string> = {
   'sire-offspring': 'Sire–offspring regression',
@@ -38,12 +38,11 @@ export function buildInheritanceScatterOptions(report: HeritabilityReport, theme
   const [lo, hi] = xs.length ? [Math.min(...xs), Math.max(...xs)] : [-1, 1];
   return {
     ...chartBase(theme, `${points.length} offspring of ${report.trait.label.toLowerCase()} against their midparent, with the regression line.`),
-    legend: { top: 0, left: 0, textStyle: { color: theme.text, fontFamily: theme.font }, data: ['Offspring', 'Regression line'] },
+    legend: { top: 0, left: 0, ...legendStyle(theme), data: ['Offspring', 'Regression line'] },
     grid: { left: 16, right: 24, top: 44, bottom: 64 },
     tooltip: {
       trigger: 'item',
-      confine: true,
-      textStyle: { fontFamily: theme.font },
+      ...tooltipStyle(theme),
       formatter: (p: { seriesName: string; value: [number, number]; data: { earId?: string } }) =>
         p.seriesName === 'Offspring'
           ? `<b>${p.data.earId ?? ''}</b><br>Midparent ${p.value[0].toFixed(2)} SD<br>Offspring ${p.value[1].toFixed(2)} SD`
@@ -84,12 +83,11 @@ export function buildEstimatesOptions(report: HeritabilityReport, theme: ChartTh
   const range = report.plausibleRange;
   return {
     ...chartBase(theme, `Heritability of ${report.trait.label.toLowerCase()} by ${estimates.length} methods, with 95 % intervals.`),
-    legend: { top: 0, left: 0, textStyle: { color: theme.text, fontFamily: theme.font }, data: ['h²', intervalLegend('95 % interval')] },
+    legend: { top: 0, left: 0, ...legendStyle(theme), data: ['h²', intervalLegend('95 % interval')] },
     grid: { left: 8, right: 24, top: 40, bottom: 64 },
     tooltip: {
       trigger: 'item',
-      confine: true,
-      textStyle: { fontFamily: theme.font },
+      ...tooltipStyle(theme),
       formatter: (p: { dataIndex: number }) => {
         const e = estimates[p.dataIndex];
         return e ? `${METHOD_LABELS[e.method]}<br>h² ${e.h2.toFixed(2)} ± ${e.se.toFixed(2)} (95 %: ${e.lower.toFixed(2)} to ${e.upper.toFixed(2)})<br>n ${e.n}` : '';
@@ -113,7 +111,7 @@ export function buildEstimatesOptions(report: HeritabilityReport, theme: ChartTh
           markArea: {
             silent: true,
             itemStyle: { color: theme.reference, opacity: 0.14 },
-            label: { show: true, position: 'bottom', distance: 4, color: theme.reference, fontFamily: theme.font, formatter: `Published ${range.lower}–${range.upper}` },
+            label: { show: true, position: 'top', distance: 4, color: theme.reference, fontFamily: theme.font, formatter: `Published ${range.lower}–${range.upper}` },
             data: [[{ xAxis: range.lower }, { xAxis: range.upper }]],
           },
         } : {}),

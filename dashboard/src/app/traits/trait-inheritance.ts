@@ -1,5 +1,4 @@
-import { ChangeDetectionStrategy, Component, ElementRef, computed, inject, input, linkedSignal, signal, viewChild } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -7,23 +6,31 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { MatSortModule, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router } from '@angular/router';
+import { Router } from '@angular/router';
 import type { ECElementEvent } from 'echarts/core';
 import { provideEchartsCore } from 'ngx-echarts';
-import { map } from 'rxjs';
-import type { HeritabilityEstimate, HeritabilityReport } from '@shared/contracts/analytics';
+import type { HeritabilityEstimate } from '@shared/contracts/analytics';
+import { SELECTION_CAUTIONS } from '@shared/domain/cautions';
 import { BreedsApi } from '../breeds/breeds-api';
-import { CautionsNote } from '../keepers/cautions-note';
-import { readChartTheme } from '../keepers/chart-theme';
-import { PanelChart } from '../keepers/panel-chart';
-import { sortRows, type SortDirection } from '../keepers/sort-rows';
+import { CautionsNote } from '../panels/cautions-note';
+import { injectChartTheme } from '../panels/chart-theme';
+import { PanelChart } from '../panels/panel-chart';
+import { lastValue, routedView } from '../panels/routed-view';
+import { sortRows, type RowOrder, type SortKeys } from '../panels/sort-rows';
+import { traitChoices } from '../panels/trait-choices';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { LoadError } from '../status/load-error';
 import { METHOD_LABELS, buildEstimatesOptions, buildInheritanceScatterOptions, estimatesOf } from './trait-chart-options';
-import { traitChoices } from './trait-choices';
 import { estimateCsvColumns, intervalText, pointCsvColumns, sampleText, withinRange } from './trait-table';
 import { traitParams, traitViewFrom, type TraitView } from './trait-view';
 import { TraitsApi } from './traits-api';
+
+const ESTIMATE_SORT: SortKeys<HeritabilityEstimate> = {
+  method: (e) => METHOD_LABELS[e.method],
+  h2: (e) => e.h2,
+  se: (e) => e.se,
+  n: (e) => e.n,
+};
 
 @Component({
   selector: 'kl-trait-inheritance',
@@ -38,27 +45,20 @@ import { TraitsApi } from './traits-api';
 })
 export class TraitInheritance {
   private readonly api = inject(TraitsApi);
-  private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
-  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
-  private readonly scatterChart = viewChild<PanelChart>('scatter');
 
   readonly rabbitryId = input.required<string>();
 
-  protected readonly view = toSignal(this.route.queryParams.pipe(map((p) => traitViewFrom(p))), {
-    initialValue: traitViewFrom(this.route.snapshot.queryParams),
-  });
+  private readonly address = routedView(traitViewFrom, traitParams);
+  protected readonly view = this.address.view;
   protected readonly report = this.api.heritability(this.rabbitryId, this.view);
-  protected readonly shown = linkedSignal<HeritabilityReport | undefined, HeritabilityReport | undefined>({
-    source: () => (this.report.hasValue() ? this.report.value() : undefined),
-    computation: (next, previous) => next ?? previous?.value,
-  });
+  protected readonly shown = lastValue(this.report);
+  protected readonly cautions = SELECTION_CAUTIONS;
 
   private readonly breeds = inject(BreedsApi).list();
   protected readonly traits = computed(() => traitChoices(this.breeds.hasValue() ? this.breeds.value() : []));
 
-  private theme: ReturnType<typeof readChartTheme> | null = null;
-  private readonly chartTheme = () => (this.theme ??= readChartTheme(this.host));
+  private readonly chartTheme = injectChartTheme();
   protected readonly scatterOptions = computed(() => {
     const r = this.shown();
     return r ? buildInheritanceScatterOptions(r, this.chartTheme()) : {};
@@ -70,12 +70,8 @@ export class TraitInheritance {
   protected readonly estimates = computed(() => (this.shown() ? estimatesOf(this.shown()!) : []));
   protected readonly estimatesHeight = computed(() => 110 + 40 * Math.max(this.estimates().length, 1));
 
-  private readonly sort = signal<Sort>({ active: 'method', direction: '' });
-  protected readonly rows = computed(() => {
-    const key = this.sort().active as 'method' | 'h2' | 'se' | 'n';
-    const value = (e: HeritabilityEstimate) => (key === 'method' ? METHOD_LABELS[e.method] : e[key]);
-    return sortRows(this.estimates(), value, this.sort().direction as SortDirection);
-  });
+  private readonly sort = signal<RowOrder>({ active: 'method', direction: '' });
+  protected readonly rows = computed(() => sortRows(this.estimates(), this.sort(), ESTIMATE_SORT));
   protected readonly columns = ['method', 'h2', 'se', 'interval', 'n', 'slope', 'range'];
 
   protected readonly methodLabels = METHOD_LABELS;
@@ -111,20 +107,20 @@ export class TraitInheritance {
 
   protected saveCsv(): void {
     const r = this.shown();
-    if (r) downloadCsv(csvFileName('heritability', r.trait.label, r.asOf), this.rows(), estimateCsvColumns(r));
+    if (r) downloadCsv(`${this.fileStem('heritability')}.csv`, this.rows(), estimateCsvColumns(r));
   }
 
   protected savePointsCsv(): void {
     const r = this.shown();
-    if (r) downloadCsv(csvFileName('offspring and midparent', r.trait.label, r.asOf), r.scatter.points, pointCsvColumns(r));
+    if (r) downloadCsv(`${this.fileStem('offspring and midparent')}.csv`, r.scatter.points, pointCsvColumns(r));
   }
 
-  protected savePng(): void {
+  protected fileStem(what: string): string {
     const r = this.shown();
-    void this.scatterChart()?.savePng(csvFileName('offspring and midparent', r?.trait.label, r?.asOf).replace(/\.csv$/, '.png'));
+    return csvFileName(what, r?.trait.label, r?.asOf).replace(/\.csv$/, '');
   }
 
   private show(view: TraitView): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams: traitParams(view), replaceUrl: true });
+    this.address.show(view);
   }
 }

@@ -1,8 +1,6 @@
 import { toCsv } from '@shared/csv/to-csv';
-import { traitChoices } from './trait-choices';
 import { heritabilityReport } from './trait-fixtures';
 import { estimateCsvColumns, intervalText, sampleText, withinRange } from './trait-table';
-import { DEFAULT_EVALUATION_TRAITS } from '@shared/domain/breed';
 
 describe('trait inheritance table', () => {
   const report = heritabilityReport();
@@ -25,11 +23,5 @@ describe('trait inheritance table', () => {
   it('exports every method with its standard error, interval and the one used for the reading', () => {
     const csv = toCsv([mid], estimateCsvColumns(report));
     expect(csv.split('\r\n')[1]).toBe('Weight at 12 weeks,Brackenrow only.,Midparent–offspring regression,0.23,0.25,-0.26,0.72,22,22 matings,0.115,0.125,yes,0.1–0.45,');
-  });
-
-  it('offers the three standard-age weights, then each evaluation trait once', () => {
-    const choices = traitChoices([{ evaluationTemplate: { traits: DEFAULT_EVALUATION_TRAITS.slice(0, 2) } }, { evaluationTemplate: { traits: DEFAULT_EVALUATION_TRAITS.slice(0, 1) } }]);
-    expect(choices.map((c) => c.key)).toEqual(['weight_8w', 'weight_12w', 'weight_16w', 'body_type', 'balance']);
-    expect(choices[1]!.label).toBe('Weight at 12 weeks');
   });
 });

@@ -1,7 +1,7 @@
 import { httpResource } from '@angular/common/http';
 import { Injectable } from '@angular/core';
 import { HeritabilityReport } from '@shared/contracts/analytics';
-import { analyticsUrl } from '../keepers/keepers-api';
+import { analyticsUrl } from '../panels/analytics-url';
 import { traitParams, type TraitView } from './trait-view';
 
 /** Heritability of a trait in the rabbitry, or pooled over every herd the user may see. */

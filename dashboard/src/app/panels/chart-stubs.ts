@@ -1,10 +1,12 @@
+import { TestBed } from '@angular/core/testing';
 import type { EChartsCoreOption } from 'echarts/core';
 import * as echarts from 'echarts/core';
 
 /**
  * What ECharts needs of a browser that jsdom lacks, for component specs: a ResizeObserver
  * (ngx-echarts watches the chart's size) and a 2D canvas context that can measure text (ECharts
- * lays out labels with it even when it draws SVG). Text is measured as 7 px a character.
+ * lays out labels with it even when it draws SVG). Text is measured as 7 px a character. Plain
+ * assignments, so the file needs no test-runner types.
  */
 export function stubChartEnvironment(): void {
   if (!('ResizeObserver' in globalThis)) {
@@ -35,5 +37,16 @@ export function renderSvg(option: EChartsCoreOption, width = 640, height = 400):
     return chart.renderToSVGString();
   } finally {
     chart.dispose();
+  }
+}
+
+/**
+ * Lets signals, effects, the router and resolved responses run their course. (`whenStable`
+ * would wait for requests still open in the testing backend, which a test flushes itself.)
+ */
+export async function settle(): Promise<void> {
+  for (let i = 0; i < 3; i++) {
+    TestBed.tick();
+    await new Promise((resolve) => setTimeout(resolve, 0));
   }
 }

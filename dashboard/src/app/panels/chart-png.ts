@@ -13,9 +13,11 @@ export interface ChartPngSource {
  * A PNG of a chart. Panels draw with the SVG renderer (text stays in the page, sharp when
  * printed), whose getDataURL gives SVG only; so the same option is drawn once more, off screen,
  * by the canvas renderer — loaded only when a breeder asks for an image — at twice the
- * resolution, and that canvas's getDataURL is the PNG. Cost: one extra render of the chart.
+ * resolution, and that canvas's getDataURL is the PNG. Canvas text takes the fonts the page has
+ * loaded, so the picture waits for them and keeps the app font. Cost: one extra render of the chart.
  */
 export async function chartPngDataUrl(source: ChartPngSource): Promise<string> {
+  await document.fonts?.ready;
   const { CanvasRenderer } = await import('echarts/renderers');
   source.echarts.use([CanvasRenderer]);
   const host = document.createElement('div');

@@ -1,0 +1,3 @@
+/** The address of one of a rabbitry's analysis reports. */
+export const analyticsUrl = (rabbitryId: string, report: string) =>
+  `/api/rabbitries/${encodeURIComponent(rabbitryId)}/analytics/${report}`;
