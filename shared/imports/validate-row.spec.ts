@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { EarId } from '../contracts/animals';
+import { EAR_ID_MAX_LENGTH } from '../domain/terms';
 import type { ImportContext } from './import-records';
 import { validateRow } from './validate-row';
 
@@ -34,6 +36,15 @@ describe('validateRow: animals', () => {
       { field: 'sire_ear_id', message: 'the sire cannot be the animal itself (A1)' },
       { field: 'born', message: 'date 2027-01-03 is in the future' },
     ]);
+  });
+
+  it('takes ear IDs up to the same length as the animal form, and no longer', () => {
+    const longest = 'A'.repeat(EAR_ID_MAX_LENGTH);
+    expect(validateRow('animals', { ear_id: longest, sex: 'doe', breed: 'X' }, ctx).value?.earId).toBe(longest);
+    expect(EarId.safeParse(longest).success).toBe(true);
+    const tooLong = validateRow('animals', { ear_id: `${longest}B`, sex: 'doe', breed: 'X' }, ctx);
+    expect(tooLong.errors).toEqual([{ field: 'ear_id', message: `Ear ID (tattoo) is longer than ${EAR_ID_MAX_LENGTH} characters` }]);
+    expect(EarId.safeParse(`${longest}B`).success).toBe(false);
   });
 
   it('a bare number as weight is not understood', () => {
