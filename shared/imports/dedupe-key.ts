@@ -1,7 +1,14 @@
 import type { ImportKindKey } from './import-kinds';
 import type { ImportRecords } from './import-records';
 
-const norm = (s: string | null | undefined) => (s ?? '').trim().replace(/\s+/g, ' ').toLowerCase();
+/** Leading, trailing or repeated whitespace, or whitespace other than a plain space. */
+const UNTIDY_SPACE = /^\s|\s$|\s\s|[^\S ]/;
+
+/** Trimmed, single spaces, lower case. Most cells are tidy already and skip the rewrite. O(length). */
+const norm = (s: string | null | undefined): string => {
+  if (!s) return '';
+  return (UNTIDY_SPACE.test(s) ? s.trim().replace(/\s+/g, ' ') : s).toLowerCase();
+};
 
 /**
  * The key that identifies a record of a kind, so that importing the same file twice adds
@@ -11,30 +18,24 @@ const norm = (s: string | null | undefined) => (s ?? '').trim().replace(/\s+/g, 
  * spaces and without case. Parts are joined with '|'. Cost O(length of the parts).
  */
 export function dedupeKey<K extends ImportKindKey>(kind: K, value: ImportRecords[K]): string {
-  const parts = ((): (string | number | null)[] => {
-    switch (kind) {
-      case 'animals': {
-        const v = value as ImportRecords['animals'];
-        return [v.earId];
-      }
-      case 'weights': {
-        const v = value as ImportRecords['weights'];
-        return [v.earId, v.weighedOn];
-      }
-      case 'litters': {
-        const v = value as ImportRecords['litters'];
-        return [v.litterCode];
-      }
-      case 'evaluations': {
-        const v = value as ImportRecords['evaluations'];
-        return [v.earId, v.evaluatedOn];
-      }
-      default: {
-        const v = value as ImportRecords['results'];
-        const who = v.earId ? `ear:${v.earId}` : `exhibitor:${norm(v.exhibitor)}`;
-        return [v.showName, v.showDate, v.breed, v.variety, v.sex, v.ageClass, v.placing, who];
-      }
+  switch (kind) {
+    case 'animals':
+      return norm((value as ImportRecords['animals']).earId);
+    case 'weights': {
+      const v = value as ImportRecords['weights'];
+      return `${norm(v.earId)}|${norm(v.weighedOn)}`;
     }
-  })();
-  return parts.map((p) => norm(typeof p === 'number' ? String(p) : p)).join('|');
+    case 'litters':
+      return norm((value as ImportRecords['litters']).litterCode);
+    case 'evaluations': {
+      const v = value as ImportRecords['evaluations'];
+      return `${norm(v.earId)}|${norm(v.evaluatedOn)}`;
+    }
+    default: {
+      // One template string: this runs once per row of files of a million results.
+      const v = value as ImportRecords['results'];
+      const who = v.earId ? `ear:${norm(v.earId)}` : `exhibitor:${norm(v.exhibitor)}`;
+      return `${norm(v.showName)}|${norm(v.showDate)}|${norm(v.breed)}|${norm(v.variety)}|${norm(v.sex)}|${norm(v.ageClass)}|${v.placing}|${who}`;
+    }
+  }
 }

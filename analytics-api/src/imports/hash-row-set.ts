@@ -1,5 +1,9 @@
+/** The first 64 bits of a digest as two unsigned 32-bit halves (big-endian). */
+const high = (d: Uint8Array) => ((d[0]! << 24) | (d[1]! << 16) | (d[2]! << 8) | d[3]!) >>> 0;
+const low = (d: Uint8Array) => ((d[4]! << 24) | (d[5]! << 16) | (d[6]! << 8) | d[7]!) >>> 0;
+
 /**
- * A set of 40-hex SHA-1 digests, each remembered with the row it was first seen on, in flat
+ * A set of SHA-1 digests (20 bytes), each remembered with the row it was first seen on, in flat
  * typed arrays (open addressing, linear probing on the first 64 bits of the digest). A Map of
  * strings costs about 100 bytes an entry; this costs 12, which keeps a million-row import
  * within its memory budget. Collisions on 64 bits of SHA-1 are negligible at this size
@@ -23,19 +27,19 @@ export class HashRowSet {
   }
 
   /** The row the digest was first added with, or undefined. */
-  get(hex: string): number | undefined {
-    const i = this.find(parseInt(hex.slice(0, 8), 16), parseInt(hex.slice(8, 16), 16));
+  get(digest: Uint8Array): number | undefined {
+    const i = this.find(high(digest), low(digest));
     return this.rows[i] >= 0 ? this.rows[i] : undefined;
   }
 
-  has(hex: string): boolean {
-    return this.get(hex) !== undefined;
+  has(digest: Uint8Array): boolean {
+    return this.get(digest) !== undefined;
   }
 
   /** Adds the digest with its row unless present; returns the row it already had, if any. */
-  add(hex: string, row = 0): number | undefined {
-    const h = parseInt(hex.slice(0, 8), 16);
-    const l = parseInt(hex.slice(8, 16), 16);
+  add(digest: Uint8Array, row = 0): number | undefined {
+    const h = high(digest);
+    const l = low(digest);
     const i = this.find(h, l);
     if (this.rows[i] >= 0) return this.rows[i];
     this.hi[i] = h;
