@@ -9,6 +9,16 @@ import type { ImportContext, ImportRecords, RowIssue, RowValidation } from './im
 import { parseDate } from './parse-date';
 
 const AWARD_SEPARATORS = /[\s,|;]+/;
+const INNER_SPACE = /\s\s|[^\S ]/;
+const WHOLE_NUMBER = /^-?\d+$/;
+
+function toEnum(cell: string, f: ImportField): { value: string | null; error: string | null } {
+  const lower = cell.toLowerCase();
+  const value = f.values?.includes(lower) ? lower : f.valueAliases?.[lower];
+  if (value) return { value, error: null };
+  const others = f.valueAliases ? ` (also ${Object.keys(f.valueAliases).join(', ')})` : '';
+  return { value: null, error: `${f.label} "${cell}" is not understood: use ${f.values?.join(', ')}${others}` };
+}
 const YES = new Set(['yes', 'y', 'true', '1', 'x']);
 const NO = new Set(['no', 'n', 'false', '0']);
 
@@ -79,9 +89,12 @@ class RowReader {
 
   /** The trimmed cell, or null when empty (an error when the field is required). */
   raw(key: string): string | null {
-    const s = this.slot(key);
+    return this.cellOf(this.slot(key));
+  }
+
+  private cellOf(s: Slot): string | null {
     const cell = s.column < 0 ? '' : (this.cells[s.column] ?? '').trim();
-    if (cell === '') return s.field.required ? this.error(key, `${s.field.label} is missing`) : null;
+    if (cell === '') return s.field.required ? this.error(s.field.key, `${s.field.label} is missing`) : null;
     return cell;
   }
 
@@ -90,9 +103,9 @@ class RowReader {
    * and sexes repeat down a file, so most rows reuse the last outcome.
    */
   private converted<T>(key: string, convert: (cell: string, field: ImportField) => { value: T | null; error: string | null }): T | null {
-    const cell = this.raw(key);
-    if (cell === null) return null;
     const s = this.slot(key);
+    const cell = this.cellOf(s);
+    if (cell === null) return null;
     if (s.lastCell !== cell || s.lastOutcome === null) {
       s.lastOutcome = convert(cell, s.field);
       s.lastCell = cell;
@@ -102,34 +115,39 @@ class RowReader {
   }
 
   text(key: string): string | null {
-    const cell = this.raw(key);
+    const s = this.slot(key);
+    const cell = this.cellOf(s);
     if (cell === null) return null;
-    const max = this.field(key).maxLength;
-    if (max !== undefined && cell.length > max) return this.error(key, `${this.field(key).label} is longer than ${max} characters`);
+    const max = s.field.maxLength;
+    if (max !== undefined && cell.length > max) return this.error(key, `${s.field.label} is longer than ${max} characters`);
     return cell;
   }
 
   /** Ear IDs are compared without case or inner spacing, so they are stored upper-case. */
   earId(key: string): string | null {
-    return this.text(key)?.replace(/\s+/g, ' ').toUpperCase() ?? null;
+    const cell = this.text(key);
+    if (cell === null) return null;
+    return (INNER_SPACE.test(cell) ? cell.replace(/\s+/g, ' ') : cell).toUpperCase();
   }
 
   date(key: string): string | null {
-    return this.converted(key, (cell) => {
-      const parsed = parseDate(cell, this.ctx.dateOrder);
-      if (!parsed.ok) return { value: null, error: parsed.message };
-      if (parsed.date > this.ctx.today) return { value: null, error: `date ${parsed.date} is in the future` };
-      return { value: parsed.date, error: null };
-    });
+    return this.converted(key, this.toDate);
   }
 
+  private readonly toDate = (cell: string) => {
+    const parsed = parseDate(cell, this.ctx.dateOrder);
+    if (!parsed.ok) return { value: null, error: parsed.message };
+    if (parsed.date > this.ctx.today) return { value: null, error: `date ${parsed.date} is in the future` };
+    return { value: parsed.date, error: null };
+  };
+
   int(key: string, min = 0): number | null {
-    const cell = this.raw(key);
+    const s = this.slot(key);
+    const cell = this.cellOf(s);
     if (cell === null) return null;
-    const label = this.field(key).label;
-    if (!/^-?\d+$/.test(cell)) return this.error(key, `${label} "${cell}" is not a whole number`);
+    if (!WHOLE_NUMBER.test(cell)) return this.error(key, `${s.field.label} "${cell}" is not a whole number`);
     const n = Number(cell);
-    if (n < min) return this.error(key, min === 0 ? `${label} cannot be negative` : `${label} must be at least ${min}`);
+    if (n < min) return this.error(key, min === 0 ? `${s.field.label} cannot be negative` : `${s.field.label} must be at least ${min}`);
     return n;
   }
 
@@ -150,13 +168,7 @@ class RowReader {
   }
 
   enumValue<T extends string>(key: string): T | null {
-    return this.converted<T>(key, (cell, f) => {
-      const lower = cell.toLowerCase();
-      const value = f.values?.includes(lower) ? lower : f.valueAliases?.[lower];
-      if (value) return { value: value as T, error: null };
-      const others = f.valueAliases ? ` (also ${Object.keys(f.valueAliases).join(', ')})` : '';
-      return { value: null, error: `${f.label} "${cell}" is not understood: use ${f.values?.join(', ')}${others}` };
-    });
+    return this.converted(key, toEnum) as T | null;
   }
 
   bool(key: string): boolean | null {

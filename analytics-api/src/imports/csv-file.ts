@@ -126,7 +126,7 @@ export async function* csvRows(path: string, shape: Pick<CsvShape, 'encoding' | 
     row += rows.length;
     return out;
   };
-  for await (const piece of createReadStream(path, { highWaterMark: 1 << 20 }) as AsyncIterable<Buffer>) {
+  for await (const piece of createReadStream(path, { highWaterMark: 1 << 17 }) as AsyncIterable<Buffer>) {
     let text = decoder ? decoder.decode(piece, { stream: true }) : iconv.decode(piece, 'win1252');
     if (bytesRead === 0) text = text.replace(/^\uFEFF/, '');
     bytesRead += piece.length;

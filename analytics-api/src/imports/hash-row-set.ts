@@ -1,9 +1,15 @@
-/** The first 64 bits of a digest as two unsigned 32-bit halves (big-endian). */
-const high = (d: Uint8Array) => ((d[0]! << 24) | (d[1]! << 16) | (d[2]! << 8) | d[3]!) >>> 0;
-const low = (d: Uint8Array) => ((d[4]! << 24) | (d[5]! << 16) | (d[6]! << 8) | d[7]!) >>> 0;
+/** Eight hex digits from `at` as an unsigned 32-bit number, without cutting a substring. */
+function hex32(hex: string, at: number): number {
+  let n = 0;
+  for (let i = at; i < at + 8; i++) {
+    const c = hex.charCodeAt(i);
+    n = n * 16 + (c <= 57 ? c - 48 : (c | 32) - 87);
+  }
+  return n;
+}
 
 /**
- * A set of SHA-1 digests (20 bytes), each remembered with the row it was first seen on, in flat
+ * A set of 40-hex SHA-1 digests, each remembered with the row it was first seen on, in flat
  * typed arrays (open addressing, linear probing on the first 64 bits of the digest). A Map of
  * strings costs about 100 bytes an entry; this costs 12, which keeps a million-row import
  * within its memory budget. Collisions on 64 bits of SHA-1 are negligible at this size
@@ -27,19 +33,19 @@ export class HashRowSet {
   }
 
   /** The row the digest was first added with, or undefined. */
-  get(digest: Uint8Array): number | undefined {
-    const i = this.find(high(digest), low(digest));
+  get(hex: string): number | undefined {
+    const i = this.find(hex32(hex, 0), hex32(hex, 8));
     return this.rows[i] >= 0 ? this.rows[i] : undefined;
   }
 
-  has(digest: Uint8Array): boolean {
-    return this.get(digest) !== undefined;
+  has(hex: string): boolean {
+    return this.get(hex) !== undefined;
   }
 
   /** Adds the digest with its row unless present; returns the row it already had, if any. */
-  add(digest: Uint8Array, row = 0): number | undefined {
-    const h = high(digest);
-    const l = low(digest);
+  add(hex: string, row = 0): number | undefined {
+    const h = hex32(hex, 0);
+    const l = hex32(hex, 8);
     const i = this.find(h, l);
     if (this.rows[i] >= 0) return this.rows[i];
     this.hi[i] = h;

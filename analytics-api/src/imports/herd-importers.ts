@@ -70,7 +70,7 @@ abstract class HerdImporter<K extends HerdKind> implements KindImporter<K> {
   protected readonly stubs = new Stubs();
   constructor(protected readonly herd: HerdContext, protected readonly ctx: ImporterContext) {}
   abstract readonly validate: (cells: readonly string[]) => RowValidation<ImportRecords[K]>;
-  abstract accept(record: ImportRecords[K], row: number, keyHash: Buffer, report: CheckReport): void;
+  abstract accept(record: ImportRecords[K], row: number, keyHash: string, report: CheckReport): void;
   async finishCheck(report: CheckReport): Promise<void> {
     report.stubsToCreate = [...this.stubs.wanted.keys()].filter((e) => !this.herd.animals.has(e)).length;
   }
@@ -103,7 +103,7 @@ export class AnimalsImporter extends HerdImporter<'animals'> {
 
   readonly validate = this.validator('animals');
 
-  accept(r: ImportRecords['animals'], row: number, _hash: Buffer, report: CheckReport): void {
+  accept(r: ImportRecords['animals'], row: number, _hash: string, report: CheckReport): void {
     if (!this.herd.breedsByName.has(r.breed.toLowerCase())) {
       report.problem(row, 'breed', `breed "${r.breed}" is not in the breed catalogue (known: ${[...this.herd.breedsByName.values()].map((b) => b.name).join(', ')})`, 'error');
       report.skippedRows++;
@@ -171,7 +171,7 @@ export class WeightsImporter extends HerdImporter<'weights'> {
 
   readonly validate = this.validator('weights');
 
-  accept(r: ImportRecords['weights'], row: number, _hash: Buffer, report: CheckReport): void {
+  accept(r: ImportRecords['weights'], row: number, _hash: string, report: CheckReport): void {
     if (!this.resolveAnimal(r.earId, row, 'ear_id', report)) return;
     const animal = this.herd.animals.get(r.earId);
     if (animal && this.existing.has(`${animal.id}|${r.weighedOn}`)) {
@@ -214,7 +214,7 @@ export class LittersImporter extends HerdImporter<'litters'> {
 
   readonly validate = this.validator('litters');
 
-  accept(r: ImportRecords['litters'], row: number, _hash: Buffer, report: CheckReport): void {
+  accept(r: ImportRecords['litters'], row: number, _hash: string, report: CheckReport): void {
     if (this.existing.has(r.litterCode.toUpperCase())) {
       report.alreadyPresent++;
       return;
@@ -272,7 +272,7 @@ export class EvaluationsImporter extends HerdImporter<'evaluations'> {
     return check(cells);
   };
 
-  accept(r: ImportRecords['evaluations'], row: number, _hash: Buffer, report: CheckReport): void {
+  accept(r: ImportRecords['evaluations'], row: number, _hash: string, report: CheckReport): void {
     if (!this.resolveAnimal(r.earId, row, 'ear_id', report)) return;
     const animal = this.herd.animals.get(r.earId);
     if (animal && this.existing.has(`${animal.id}|${r.evaluatedOn}`)) {

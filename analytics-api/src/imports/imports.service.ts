@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import Papa from 'papaparse';
 import type { DataSource } from 'typeorm';
 import type { ImportCheckOptions, ImportJob as ImportJobDto, ImportSummary, RowProblem } from '@shared/contracts/imports';
-import { dedupeKey } from '@shared/imports/dedupe-key';
+import { dedupeKeyer } from '@shared/imports/dedupe-key';
 import { importKind, type ImportKindKey } from '@shared/imports/import-kinds';
 import { suggestMapping } from '@shared/imports/suggest-mapping';
 import { ImportJob } from '../db/entities/import-job.entity';
@@ -183,7 +183,7 @@ export class ImportsService {
       },
     };
     const seen = new HashRowSet();
-    const kind = job.kind as ImportKindKey;
+    const keyOf = dedupeKeyer(job.kind as ImportKindKey);
     let total = 0;
     let duplicatesInFile = 0;
     for await (const chunk of csvRows(job.filePath!, { encoding: job.encoding as 'utf-8', delimiter: job.delimiter! })) {
@@ -193,7 +193,7 @@ export class ImportsService {
         for (const e of v.errors) report.problem(row, e.field, e.message, 'error');
         for (const w of v.warnings) report.problem(row, w.field, w.message, 'warning');
         if (!v.value) continue;
-        const hash = dedupeHash(dedupeKey(kind, v.value));
+        const hash = dedupeHash(keyOf(v.value));
         const first = seen.add(hash, row);
         if (first !== undefined) {
           duplicatesInFile++;

@@ -25,8 +25,8 @@ export type CommitProgress = (fraction: number, rows: number) => void;
 export interface KindImporter<K extends ImportKindKey> {
   /** Checks one row's cells (laid out as ImporterContext.columns says). */
   validate(cells: readonly string[]): RowValidation<ImportRecords[K]>;
-  /** Called once per valid, first-in-file record; `keyHash` is its dedupe key's SHA-1. */
-  accept(record: ImportRecords[K], row: number, keyHash: Buffer, report: CheckReport): void;
+  /** Called once per valid, first-in-file record; `keyHash` is its dedupe key's SHA-1 in hex. */
+  accept(record: ImportRecords[K], row: number, keyHash: string, report: CheckReport): void;
   /** After each chunk of rows: a chance to write out what the chunk staged. */
   endChunk?(): Promise<void>;
   /** After the last row: cross-row checks (parents later in the file), staging files. */

@@ -9,7 +9,7 @@ import { ClubMembership } from '../db/entities/club-membership.entity';
 import { Show } from '../db/entities/show.entity';
 import type { CheckReport, CommitProgress, ImporterContext, KindImporter } from './kind-importer';
 import { HashRowSet } from './hash-row-set';
-import { tsvField } from './tsv';
+import { TsvLines, tsvField } from './tsv';
 
 type Result = ImportRecords['results'];
 interface StagedShow { id: number | null; name: string; showDate: string; location: string | null; sanctionNo: string | null; judges: string[] }
@@ -29,8 +29,7 @@ export class ResultsImporter implements KindImporter<'results'> {
   private memberHerds = new Map<string, number>();
   private animalsByHerd = new Map<number, Map<string, number>>();
   private out: WriteStream | null = null;
-  /** Staged lines of the current chunk, written in one go at its end. */
-  private lines = '';
+  private lines: TsvLines | null = null;
   /** The last row's show and exhibitor, as written: most rows repeat them. */
   private lastShow = { name: '', date: '', index: -1 };
   private readonly herdOfExhibitor = new Map<string, number | null>();
@@ -80,13 +79,14 @@ export class ResultsImporter implements KindImporter<'results'> {
     }
     const existingIds = this.staged.map((s) => s.id);
     if (existingIds.length) {
-      const rows: { k: Buffer }[] = await this.db.query('SELECT dedupe_key AS k FROM show_result WHERE show_id IN (?)', [existingIds]);
+      const rows: { k: string }[] = await this.db.query('SELECT LOWER(HEX(dedupe_key)) AS k FROM show_result WHERE show_id IN (?)', [existingIds]);
       for (const r of rows) this.existingKeys.add(r.k);
     }
     this.out = createWriteStream(this.tsvPath, { highWaterMark: 1 << 20 });
+    this.lines = new TsvLines(this.out);
   }
 
-  accept(r: Result, _row: number, keyHash: Buffer, report: CheckReport): void {
+  accept(r: Result, _row: number, keyHash: string, report: CheckReport): void {
     if (this.existingKeys.has(keyHash)) {
       report.alreadyPresent++;
       return;
@@ -98,7 +98,7 @@ export class ResultsImporter implements KindImporter<'results'> {
     const animalId = herd !== null && r.earId ? this.animalsByHerd.get(herd)?.get(r.earId) ?? null : null;
     report.newRows++;
     // ELT() in the commit is 1-based.
-    this.lines += `${index + 1}\t${animalId ?? '\\N'}\t${tsvField(r.earId)}\t${tsvField(r.exhibitor)}\t${tsvField(r.breed)}\t${tsvField(r.variety)}\t${r.sex}\t${r.ageClass}\t${r.entriesInClass}\t${r.exhibitorsInClass}\t${r.placing}\t${r.awards.join(' ')}\t${tsvField(r.judge)}\t${keyHash.toString('hex')}\n`;
+    this.lines!.add(`${index + 1}\t${animalId ?? '\\N'}\t${tsvField(r.earId)}\t${tsvField(r.exhibitor)}\t${tsvField(r.breed)}\t${tsvField(r.variety)}\t${r.sex}\t${r.ageClass}\t${r.entriesInClass}\t${r.exhibitorsInClass}\t${r.placing}\t${r.awards.join(' ')}\t${tsvField(r.judge)}\t${keyHash}\n`);
   }
 
   private showIndex(r: Result): number {
@@ -126,10 +126,7 @@ export class ResultsImporter implements KindImporter<'results'> {
   }
 
   async endChunk(): Promise<void> {
-    const out = this.out!;
-    const drained = out.write(this.lines);
-    this.lines = '';
-    if (!drained) await new Promise<void>((resolve) => out.once('drain', () => resolve()));
+    await this.lines!.drained();
   }
 
   async finishCheck(): Promise<void> {
@@ -138,7 +135,10 @@ export class ResultsImporter implements KindImporter<'results'> {
     await writeFile(this.showsPath, JSON.stringify(this.staged));
   }
 
-  /** Uses the staged files of the check; nothing is parsed again. */
+  /**
+   * Uses the staged files of the check; nothing is parsed again. One LOAD DATA of every staged
+   * row; IGNORE skips a row another import added since the check (the unique dedupe key).
+   */
   async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     const staged: StagedShow[] = JSON.parse(await readFile(this.showsPath, 'utf8'));
     const ids: number[] = [];
