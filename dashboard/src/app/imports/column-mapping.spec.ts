@@ -33,6 +33,23 @@ describe('column mapping', () => {
     expect(fieldLabel('results', '')).toBe('whole row');
   });
 
+  it('offers the trait columns of the herd’s breed templates for an evaluations file', () => {
+    const traits = [{ key: 'body_type', label: 'Body type', points: 50 }, { key: 'markings', label: 'Markings', points: 25 }];
+    expect(mappingFields('evaluations', traits).map((f) => [f.key, f.label, f.group])).toEqual([
+      ['ear_id', 'Ear ID (tattoo)', null],
+      ['evaluated_on', 'Evaluated on', null],
+      ['evaluator', 'Evaluator', null],
+      ['body_type', 'Body type (0–50)', 'Body type (0–50) or Markings (0–25)'],
+      ['markings', 'Markings (0–25)', 'Body type (0–50) or Markings (0–25)'],
+      ['notes', 'Notes', null],
+    ]);
+    expect(mappingProblems('evaluations', { ear_id: 'Tattoo', evaluated_on: 'Date', markings: 'Marks' }, traits)).toEqual([]);
+    expect(mappingProblems('evaluations', { ear_id: 'Tattoo', evaluated_on: 'Date' }, traits)).toEqual([
+      'Choose a column for Body type (0–50) or Markings (0–25)',
+    ]);
+    expect(fieldLabel('evaluations', 'markings', traits)).toBe('Markings (0–25)');
+  });
+
   it('notices a file of another kind than the one chosen', () => {
     const herdKinds = ['animals', 'weights', 'litters', 'evaluations'] as const;
     expect(betterKind(['ear_id', 'weighed_on', 'weight'], 'animals', herdKinds)).toBe('weights');
