@@ -119,6 +119,16 @@ describe('validateRow: evaluations', () => {
     );
   });
 
+  it('refuses a score for a trait the animal’s breed template does not have, naming the traits it does', () => {
+    const traits = [{ key: 'fur', label: 'Fur', points: 40 }, { key: 'body_type', label: 'Body type', points: 60 }];
+    const mappedTraits = [...traits, { key: 'markings', label: 'Markings', points: 25 }];
+    const row = { ear_id: 'A1', evaluated_on: '2026-06-01', fur: '35', markings: '12' };
+    expect(validateRow('evaluations', row, { ...ctx, traits, mappedTraits }).errors).toEqual([
+      { field: 'markings', message: "Markings is not a trait of this animal's breed template (it scores fur, body type): leave the cell empty" },
+    ]);
+    expect(validateRow('evaluations', { ...row, markings: ' ' }, { ...ctx, traits, mappedTraits }).value?.scores).toEqual({ fur: 35 });
+  });
+
   it('uses a breed’s own template when given', () => {
     const traits = [{ key: 'fur', label: 'Fur', points: 40 }];
     expect(validateRow('evaluations', { ear_id: 'A1', evaluated_on: '2026-06-01', fur: '35' }, { ...ctx, traits }).value?.scores).toEqual({ fur: 35 });

@@ -17,6 +17,12 @@ interface HerdAnimal { id: number; earId: string; sex: 'buck' | 'doe'; birthDate
 
 const BATCH = 1000;
 
+/** A breed's evaluation traits; the default traits for no breed or a breed without a template. */
+function traitsOfBreed(breed: Breed | undefined): readonly EvaluationTrait[] {
+  const traits = (breed?.evaluationTemplate as { traits?: EvaluationTrait[] } | null | undefined)?.traits;
+  return traits?.length ? traits : DEFAULT_EVALUATION_TRAITS;
+}
+
 /** What every herd importer needs: the rabbitry's animals by ear ID and the breed catalogue. */
 class HerdContext {
   animals = new Map<string, HerdAnimal>();
@@ -36,8 +42,7 @@ class HerdContext {
   }
 
   traitsOf(breedId: number | null): readonly EvaluationTrait[] {
-    const t = breedId ? (this.breedsById.get(breedId)?.evaluationTemplate as { traits?: EvaluationTrait[] } | null)?.traits : null;
-    return t?.length ? t : DEFAULT_EVALUATION_TRAITS;
+    return traitsOfBreed(breedId ? this.breedsById.get(breedId) : undefined);
   }
 
   domainBreed(breedId: number | null): DomainBreed | null {
@@ -305,14 +310,15 @@ async function insertIgnore(tx: EntityManager, table: string, columns: string[],
 
 /**
  * The trait columns an evaluations file for a rabbitry may map: those of the evaluation
- * templates of the breeds its animals belong to (the default traits for animals without a
- * breed or a breed without a template), or of the whole catalogue while the herd is empty.
+ * templates of the breeds its animals belong to (outside stubs aside; the default traits for
+ * animals without a breed or a breed without a template), or of the whole catalogue while the
+ * herd is empty.
  */
 export async function evaluationTraitsFor(db: DataSource, rabbitryId: number): Promise<EvaluationTrait[]> {
-  const herd = await HerdContext.load(db, rabbitryId);
-  const breedIds = new Set([...herd.animals.values()].map((a) => a.breedId));
-  if (breedIds.size === 0) for (const id of herd.breedsById.keys()) breedIds.add(id);
-  return traitsToMap([...breedIds].map((id) => herd.traitsOf(id)));
+  const breeds = new Map((await db.getRepository(Breed).find()).map((b) => [b.id, b]));
+  const rows: { breed_id: number | null }[] = await db.query('SELECT DISTINCT breed_id FROM animal WHERE rabbitry_id = ? AND is_stub = 0', [rabbitryId]);
+  const herdBreeds = rows.length ? rows.map((r) => (r.breed_id === null ? undefined : breeds.get(r.breed_id))) : [...breeds.values()];
+  return traitsToMap(herdBreeds.map(traitsOfBreed));
 }
 
 export async function createHerdImporter(kind: 'animals' | 'weights' | 'litters' | 'evaluations', db: DataSource, ctx: ImporterContext) {
