@@ -347,11 +347,8 @@ const validators: Validators = {
     if (awards.length > 0 && placing !== null && placing !== 1) {
       r.error('awards', `awards above the class go to class winners, but this animal placed ${placing}`);
     }
-    return r.result(() => ({
-      ...rec,
-      showName: rec.showName!, showDate: rec.showDate!, judge: rec.judge!, exhibitor: rec.exhibitor!, breed: rec.breed!,
-      sex: rec.sex!, ageClass: rec.ageClass!, entriesInClass: entries!, exhibitorsInClass: exhibitors!, placing: placing!,
-    }));
+    // Without errors every required field is filled: the record is used as it stands (no copy per row).
+    return r.result(() => rec as ImportRecords['results']);
   },
 };
 

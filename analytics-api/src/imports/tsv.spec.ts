@@ -15,7 +15,7 @@ describe('tsvField', () => {
 });
 
 describe('TsvLines', () => {
-  it('hands every line to the stream unchanged and in order, across buffer boundaries and for a line longer than a buffer', async () => {
+  it('hands every line to the stream unchanged and in order, in batches, and for a line of its own size', async () => {
     const pieces: Buffer[] = [];
     const out = new Writable({ highWaterMark: 1 << 16, write(chunk: Buffer, _enc, done) { pieces.push(chunk); setImmediate(done); } });
     const lines = new TsvLines(out);
