@@ -8,6 +8,8 @@ export interface MappingField {
   /** Required alone, or as one of a group of which one must be mapped. */
   required: boolean;
   group: string | null;
+  /** A few words under the field: what its group asks for. */
+  hint: string;
 }
 
 /** Evaluations: the trait columns the API offers for this herd (its breeds' templates); other kinds ignore it. */
@@ -16,16 +18,20 @@ type Traits = readonly EvaluationTrait[] | null | undefined;
 /** The fields of a kind as the mapping step lists them, required ones first within the kind's order. O(fields). */
 export function mappingFields(kind: ImportKindKey, traits?: Traits): MappingField[] {
   const definition = importKind(kind, traits ?? undefined);
-  const grouped = new Map<string, string>();
+  const grouped = new Map<string, { words: string; hint: string }>();
   for (const group of definition.requiredOneOf) {
-    const words = group.map((k) => definition.fields.find((f) => f.key === k)?.label ?? k).join(' or ');
-    for (const key of group) grouped.set(key, words);
+    const fields = group.map((k) => definition.fields.find((f) => f.key === k));
+    const words = group.map((k, i) => fields[i]?.label ?? k).join(' or ');
+    // A template's trait scores make a long group: the hint says what it asks, not every name.
+    const hint = fields.every((f) => f?.type === 'score') ? 'At least one score is needed.' : `One of: ${words}.`;
+    for (const key of group) grouped.set(key, { words, hint });
   }
   return definition.fields.map((f: ImportField) => ({
     key: f.key,
     label: f.label,
     required: f.required || grouped.has(f.key),
-    group: grouped.get(f.key) ?? null,
+    group: grouped.get(f.key)?.words ?? null,
+    hint: grouped.get(f.key)?.hint ?? '',
   }));
 }
 
