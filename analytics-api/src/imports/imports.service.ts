@@ -167,7 +167,7 @@ export class ImportsService {
 
   /**
    * The common loop of every kind: read, validate, drop in-file duplicates, classify. Reports
-   * the share of the file read after each chunk (about 1 MiB).
+   * the share of the file read after each chunk (see csvRows).
    */
   private async checkRows(job: ImportJob, importer: KindImporter<ImportKindKey>, progress: (fraction: number, rows: number) => Promise<unknown>) {
     const problems: RowProblem[] = [];
