@@ -1,13 +1,13 @@
 import * as z from 'zod';
 import { parseIsoDate } from '../domain/calendar-date';
-import { ageClassSchema, animalStatusSchema, sexSchema } from '../domain/terms';
+import { ageClassSchema, animalStatusSchema, EAR_ID_MAX_LENGTH, sexSchema } from '../domain/terms';
 import { awardSchema } from '../domain/awards';
 
 /** A calendar day as 'YYYY-MM-DD', the form every record uses. */
 export const IsoDate = z.string().refine((s) => parseIsoDate(s) !== null, 'Give a date as YYYY-MM-DD');
 
 /** Ear tattoo ID: letters, digits and - . / ; unique per rabbitry (case-insensitive). */
-export const EarId = z.string().trim().min(1, 'Give the ear ID').max(32, 'An ear ID has at most 32 characters')
+export const EarId = z.string().trim().min(1, 'Give the ear ID').max(EAR_ID_MAX_LENGTH, `An ear ID has at most ${EAR_ID_MAX_LENGTH} characters`)
   .regex(/^[\p{L}\p{N}][\p{L}\p{N}\-./ ]*$/u, 'An ear ID starts with a letter or digit and holds letters, digits, - . / only');
 
 const text = (max: number) => z.string().trim().max(max).transform((s) => (s === '' ? null : s)).nullish();

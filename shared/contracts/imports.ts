@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { evaluationTraitSchema } from '../domain/breed';
 import { IMPORT_KIND_KEYS } from '../imports/import-kinds';
 
 export const ImportKind = z.enum(IMPORT_KIND_KEYS);
@@ -54,8 +55,13 @@ export const ImportJob = z.object({
   headers: z.array(z.string()),
   sampleRows: z.array(z.array(z.string())),
   suggestedMapping: z.record(z.string(), z.string()),
+  /** Evaluations: the trait columns this herd's breed templates offer (labels, highest points); null for other kinds. */
+  evaluationTraits: z.array(evaluationTraitSchema).nullable(),
+  /** Rows handled so far by the running check (rows read) or commit (rows written). */
   processedRows: z.number().int(),
   totalRows: z.number().int(),
+  /** Share of the running check or commit done, 0–1 (bytes of the file read, rows written); null when nothing runs. */
+  progress: z.number().min(0).max(1).nullable(),
   summary: ImportSummary.nullable(),
   message: z.string().nullable(),
   startedAt: z.string(),

@@ -18,6 +18,12 @@ export const ANIMAL_STATUSES = ['active', 'sold', 'deceased', 'culled'] as const
 export type AnimalStatus = (typeof ANIMAL_STATUSES)[number];
 export const animalStatusSchema = z.enum(ANIMAL_STATUSES);
 
+/**
+ * The longest ear (tattoo) ID Keeperline stores, wherever it comes from: forms, imports and the
+ * database columns (animal.ear_id, show_result.ear_id) all use this one limit.
+ */
+export const EAR_ID_MAX_LENGTH = 32;
+
 export const SEX_LABELS: Record<Sex, string> = { buck: 'Buck', doe: 'Doe' };
 export const AGE_CLASS_LABELS: Record<AgeClass, string> = {
   junior: 'Junior',

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dedupeKey } from './dedupe-key';
+import { dedupeKey, dedupeKeyer } from './dedupe-key';
 import type { ImportContext } from './import-records';
 import { validateRow } from './validate-row';
 
@@ -30,5 +30,17 @@ describe('dedupeKey', () => {
     expect(dedupeKey('results', validateRow('results', { ...row, ear_id: 'q7' }, ctx).value!)).toBe(
       'test show|2026-04-11|test compact|black|doe|junior|2|ear:q7',
     );
+  });
+
+  it('one file\'s key function gives each record its own key, whatever came before', () => {
+    const base = {
+      show_name: 'Test Show', show_date: '2026-04-11', judge: 'J', exhibitor: 'Outside Herd', breed: 'Test Compact', variety: 'Black',
+      sex: 'doe', age_class: 'junior', entries_in_class: '6', exhibitors_in_class: '3', placing: '2',
+    };
+    const rows = [base, { ...base, variety: 'Blue ', ear_id: 'q7' }, base, { ...base, show_name: 'TEST  SHOW', placing: '3' }, base];
+    const keyOf = dedupeKeyer('results');
+    const records = rows.map((r) => validateRow('results', r, ctx).value!);
+    expect(records.map(keyOf)).toEqual(records.map((v) => dedupeKey('results', v)));
+    expect(new Set(records.map(keyOf)).size).toBe(3);
   });
 });

@@ -1,6 +1,6 @@
 import { AWARDS } from '../domain/awards';
 import { DEFAULT_EVALUATION_TRAITS, type EvaluationTrait } from '../domain/breed';
-import { AGE_CLASSES, ANIMAL_STATUSES, SEXES } from '../domain/terms';
+import { AGE_CLASSES, ANIMAL_STATUSES, EAR_ID_MAX_LENGTH, SEXES } from '../domain/terms';
 
 /**
  * Keeperline's own CSV import formats, as data: the columns of each kind with the header names a
@@ -56,9 +56,8 @@ export function normaliseHeader(header: string): string {
 const text = (key: string, label: string, aliases: string[], maxLength = 120, required = false): ImportField => ({
   key, label, required, type: 'text', aliases, maxLength,
 });
-const EAR_ID_LENGTH = 20;
 const earId = (key: string, label: string, aliases: string[], required = false) =>
-  text(key, label, aliases, EAR_ID_LENGTH, required);
+  text(key, label, aliases, EAR_ID_MAX_LENGTH, required);
 const date = (key: string, label: string, aliases: string[], required = false): ImportField => ({
   key, label, required, type: 'date', aliases,
 });

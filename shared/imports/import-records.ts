@@ -85,8 +85,10 @@ export interface ImportContext {
   unitSetting: UnitSetting;
   /** 'YYYY-MM-DD'; dates after it are refused. */
   today: string;
-  /** Evaluations: the breed's template (default traits when absent). */
+  /** Evaluations: the template of the row's breed (default traits when absent). */
   traits?: readonly EvaluationTrait[];
+  /** Evaluations: every trait the file's columns may name (see traitsToMap), for words about traits outside the row's template. */
+  mappedTraits?: readonly EvaluationTrait[];
 }
 
 export interface RowIssue {

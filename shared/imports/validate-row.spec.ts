@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { EarId } from '../contracts/animals';
+import { EAR_ID_MAX_LENGTH } from '../domain/terms';
 import type { ImportContext } from './import-records';
 import { validateRow } from './validate-row';
 
@@ -34,6 +36,15 @@ describe('validateRow: animals', () => {
       { field: 'sire_ear_id', message: 'the sire cannot be the animal itself (A1)' },
       { field: 'born', message: 'date 2027-01-03 is in the future' },
     ]);
+  });
+
+  it('takes ear IDs up to the same length as the animal form, and no longer', () => {
+    const longest = 'A'.repeat(EAR_ID_MAX_LENGTH);
+    expect(validateRow('animals', { ear_id: longest, sex: 'doe', breed: 'X' }, ctx).value?.earId).toBe(longest);
+    expect(EarId.safeParse(longest).success).toBe(true);
+    const tooLong = validateRow('animals', { ear_id: `${longest}B`, sex: 'doe', breed: 'X' }, ctx);
+    expect(tooLong.errors).toEqual([{ field: 'ear_id', message: `Ear ID (tattoo) is longer than ${EAR_ID_MAX_LENGTH} characters` }]);
+    expect(EarId.safeParse(`${longest}B`).success).toBe(false);
   });
 
   it('a bare number as weight is not understood', () => {
@@ -106,6 +117,16 @@ describe('validateRow: evaluations', () => {
     expect(validateRow('evaluations', { ear_id: 'A1', evaluated_on: '2026-06-01' }, ctx).errors[0]?.message).toBe(
       'no trait is scored: give at least one score',
     );
+  });
+
+  it('refuses a score for a trait the animal’s breed template does not have, naming the traits it does', () => {
+    const traits = [{ key: 'fur', label: 'Fur', points: 40 }, { key: 'body_type', label: 'Body type', points: 60 }];
+    const mappedTraits = [...traits, { key: 'markings', label: 'Markings', points: 25 }];
+    const row = { ear_id: 'A1', evaluated_on: '2026-06-01', fur: '35', markings: '12' };
+    expect(validateRow('evaluations', row, { ...ctx, traits, mappedTraits }).errors).toEqual([
+      { field: 'markings', message: "Markings is not a trait of this animal's breed template (it scores fur, body type): leave the cell empty" },
+    ]);
+    expect(validateRow('evaluations', { ...row, markings: ' ' }, { ...ctx, traits, mappedTraits }).value?.scores).toEqual({ fur: 35 });
   });
 
   it('uses a breed’s own template when given', () => {

@@ -1,4 +1,5 @@
 import { type Award, AWARDS } from '../domain/awards';
+import { DEFAULT_EVALUATION_TRAITS } from '../domain/breed';
 import { daysBetween } from '../domain/calendar-date';
 import { GESTATION_DAYS } from '../domain/gestation';
 import type { AgeClass, AnimalStatus, Sex } from '../domain/terms';
@@ -8,75 +9,145 @@ import type { ImportContext, ImportRecords, RowIssue, RowValidation } from './im
 import { parseDate } from './parse-date';
 
 const AWARD_SEPARATORS = /[\s,|;]+/;
+const INNER_SPACE = /\s\s|[^\S ]/;
+const WHOLE_NUMBER = /^-?\d+$/;
+
+function toEnum(cell: string, f: ImportField): { value: string | null; error: string | null } {
+  const lower = cell.toLowerCase();
+  const value = f.values?.includes(lower) ? lower : f.valueAliases?.[lower];
+  if (value) return { value, error: null };
+  const others = f.valueAliases ? ` (also ${Object.keys(f.valueAliases).join(', ')})` : '';
+  return { value: null, error: `${f.label} "${cell}" is not understood: use ${f.values?.join(', ')}${others}` };
+}
 const YES = new Set(['yes', 'y', 'true', '1', 'x']);
 const NO = new Set(['no', 'n', 'false', '0']);
 
-/** Reads the cells of one mapped row by field type, collecting errors against the field. */
+/** A field's place in the row and the last cell it converted (cells repeat down a column). */
+interface Slot {
+  field: ImportField;
+  column: number;
+  lastCell: string | null;
+  lastOutcome: { value: unknown; error: string | null } | null;
+}
+
+/** Shared by every row without issues, so that a clean row allocates no arrays. Never mutated. */
+const NO_ISSUES: RowIssue[] = Object.freeze([]) as unknown as RowIssue[];
+
+/**
+ * Reads the cells of one row by field type, collecting errors against the field. Built once
+ * per definition, context and column layout, then pointed at each row in turn: the field
+ * lookup is made once, not per row.
+ */
 class RowReader {
-  readonly errors: RowIssue[] = [];
-  readonly warnings: RowIssue[] = [];
-  private readonly fields: Map<string, ImportField>;
+  errors: RowIssue[] = NO_ISSUES;
+  warnings: RowIssue[] = NO_ISSUES;
+  private cells: readonly (string | undefined)[] = [];
+  private readonly slots = new Map<string, Slot>();
+  /** Mapped columns whose key is no field of the definition (traits of another breed's template), with their column. */
+  readonly foreignColumns: [key: string, column: number][] = [];
 
   constructor(
-    private readonly row: Readonly<Record<string, string | undefined>>,
+    readonly definition: ImportKindDefinition,
     private readonly ctx: ImportContext,
-    definition: ImportKindDefinition,
+    columns: ColumnIndex,
   ) {
-    this.fields = new Map(definition.fields.map((f) => [f.key, f]));
+    for (const f of definition.fields) this.slots.set(f.key, { field: f, column: columns[f.key] ?? -1, lastCell: null, lastOutcome: null });
+    for (const [key, column] of Object.entries(columns)) if (!this.slots.has(key)) this.foreignColumns.push([key, column]);
+  }
+
+  start(cells: readonly (string | undefined)[]): void {
+    this.cells = cells;
+    this.errors = NO_ISSUES;
+    this.warnings = NO_ISSUES;
+  }
+
+  /** The foreign columns this row fills. */
+  filledForeignKeys(): string[] {
+    return this.foreignColumns.filter(([, i]) => (this.cells[i] ?? '').trim() !== '').map(([key]) => key);
+  }
+
+  private slot(key: string): Slot {
+    const s = this.slots.get(key);
+    if (!s) throw new Error(`validateRow has no field ${key}`);
+    return s;
   }
 
   field(key: string): ImportField {
-    const f = this.fields.get(key);
-    if (!f) throw new Error(`validateRow has no field ${key}`);
-    return f;
+    return this.slot(key).field;
   }
 
   error(field: string, message: string): null {
+    if (this.errors === NO_ISSUES) this.errors = [];
     this.errors.push({ field, message });
     return null;
   }
 
   warn(field: string, message: string): void {
+    if (this.warnings === NO_ISSUES) this.warnings = [];
     this.warnings.push({ field, message });
   }
 
   /** The trimmed cell, or null when empty (an error when the field is required). */
   raw(key: string): string | null {
-    const f = this.field(key);
-    const cell = (this.row[key] ?? '').trim();
-    if (cell === '') return f.required ? this.error(key, `${f.label} is missing`) : null;
+    return this.cellOf(this.slot(key));
+  }
+
+  private cellOf(s: Slot): string | null {
+    const cell = s.column < 0 ? '' : (this.cells[s.column] ?? '').trim();
+    if (cell === '') return s.field.required ? this.error(s.field.key, `${s.field.label} is missing`) : null;
     return cell;
   }
 
-  text(key: string): string | null {
-    const cell = this.raw(key);
+  /**
+   * A conversion that depends on the cell alone, remembered for the next row: dates, classes
+   * and sexes repeat down a file, so most rows reuse the last outcome.
+   */
+  private converted<T>(key: string, convert: (cell: string, field: ImportField) => { value: T | null; error: string | null }): T | null {
+    const s = this.slot(key);
+    const cell = this.cellOf(s);
     if (cell === null) return null;
-    const max = this.field(key).maxLength;
-    if (max !== undefined && cell.length > max) return this.error(key, `${this.field(key).label} is longer than ${max} characters`);
+    if (s.lastCell !== cell || s.lastOutcome === null) {
+      s.lastOutcome = convert(cell, s.field);
+      s.lastCell = cell;
+    }
+    const { value, error } = s.lastOutcome;
+    return error === null ? (value as T) : this.error(key, error);
+  }
+
+  text(key: string): string | null {
+    const s = this.slot(key);
+    const cell = this.cellOf(s);
+    if (cell === null) return null;
+    const max = s.field.maxLength;
+    if (max !== undefined && cell.length > max) return this.error(key, `${s.field.label} is longer than ${max} characters`);
     return cell;
   }
 
   /** Ear IDs are compared without case or inner spacing, so they are stored upper-case. */
   earId(key: string): string | null {
-    return this.text(key)?.replace(/\s+/g, ' ').toUpperCase() ?? null;
+    const cell = this.text(key);
+    if (cell === null) return null;
+    return (INNER_SPACE.test(cell) ? cell.replace(/\s+/g, ' ') : cell).toUpperCase();
   }
 
   date(key: string): string | null {
-    const cell = this.raw(key);
-    if (cell === null) return null;
-    const parsed = parseDate(cell, this.ctx.dateOrder);
-    if (!parsed.ok) return this.error(key, parsed.message);
-    if (parsed.date > this.ctx.today) return this.error(key, `date ${parsed.date} is in the future`);
-    return parsed.date;
+    return this.converted(key, this.toDate);
   }
 
+  private readonly toDate = (cell: string) => {
+    const parsed = parseDate(cell, this.ctx.dateOrder);
+    if (!parsed.ok) return { value: null, error: parsed.message };
+    if (parsed.date > this.ctx.today) return { value: null, error: `date ${parsed.date} is in the future` };
+    return { value: parsed.date, error: null };
+  };
+
   int(key: string, min = 0): number | null {
-    const cell = this.raw(key);
+    const s = this.slot(key);
+    const cell = this.cellOf(s);
     if (cell === null) return null;
-    const label = this.field(key).label;
-    if (!/^-?\d+$/.test(cell)) return this.error(key, `${label} "${cell}" is not a whole number`);
+    if (!WHOLE_NUMBER.test(cell)) return this.error(key, `${s.field.label} "${cell}" is not a whole number`);
     const n = Number(cell);
-    if (n < min) return this.error(key, min === 0 ? `${label} cannot be negative` : `${label} must be at least ${min}`);
+    if (n < min) return this.error(key, min === 0 ? `${s.field.label} cannot be negative` : `${s.field.label} must be at least ${min}`);
     return n;
   }
 
@@ -97,14 +168,7 @@ class RowReader {
   }
 
   enumValue<T extends string>(key: string): T | null {
-    const cell = this.raw(key);
-    if (cell === null) return null;
-    const f = this.field(key);
-    const lower = cell.toLowerCase();
-    const value = f.values?.includes(lower) ? lower : f.valueAliases?.[lower];
-    if (value) return value as T;
-    const others = f.valueAliases ? ` (also ${Object.keys(f.valueAliases).join(', ')})` : '';
-    return this.error(key, `${f.label} "${cell}" is not understood: use ${f.values?.join(', ')}${others}`);
+    return this.converted(key, toEnum) as T | null;
   }
 
   bool(key: string): boolean | null {
@@ -145,7 +209,7 @@ class RowReader {
   }
 
   result<T>(build: () => T): RowValidation<T> {
-    return this.errors.length > 0
+    return this.errors !== NO_ISSUES
       ? { errors: this.errors, warnings: this.warnings }
       : { value: build(), errors: this.errors, warnings: this.warnings };
   }
@@ -237,10 +301,15 @@ const validators: Validators = {
     const evaluator = r.text('evaluator');
     const notes = r.text('notes');
     const scores: Record<string, number> = {};
-    const traitKeys = importKind('evaluations', ctx.traits).requiredOneOf[0]!;
+    const traitKeys = r.definition.requiredOneOf[0]!;
     for (const key of traitKeys) {
       const s = r.score(key);
       if (s !== null) scores[key] = s;
+    }
+    for (const key of r.filledForeignKeys()) {
+      const label = ctx.mappedTraits?.find((t) => t.key === key)?.label ?? key;
+      const own = (ctx.traits ?? DEFAULT_EVALUATION_TRAITS).map((t) => t.label.toLowerCase()).join(', ');
+      r.error(key, `${label} is not a trait of this animal's breed template (it scores ${own}): leave the cell empty`);
     }
     if (Object.keys(scores).length === 0 && r.errors.every((e) => !traitKeys.includes(e.field))) {
       r.error(traitKeys[0]!, 'no trait is scored: give at least one score');
@@ -278,26 +347,41 @@ const validators: Validators = {
     if (awards.length > 0 && placing !== null && placing !== 1) {
       r.error('awards', `awards above the class go to class winners, but this animal placed ${placing}`);
     }
-    return r.result(() => ({
-      ...rec,
-      showName: rec.showName!, showDate: rec.showDate!, judge: rec.judge!, exhibitor: rec.exhibitor!, breed: rec.breed!,
-      sex: rec.sex!, ageClass: rec.ageClass!, entriesInClass: entries!, exhibitorsInClass: exhibitors!, placing: placing!,
-    }));
+    // Without errors every required field is filled: the record is used as it stands (no copy per row).
+    return r.result(() => rec as ImportRecords['results']);
   },
 };
 
+/** Where each field's cell sits in a row of the file: field key → column index. */
+export type ColumnIndex = Readonly<Record<string, number>>;
+
 /**
- * Checks one mapped row of an import file (field key → cell text) and turns it into a typed
- * record. Every problem is reported against its field in words a breeder understands;
+ * A checker for the rows of one file: built once for a kind, a context and the file's column
+ * layout, then called with each row's cells. Each call checks one row and turns it into a
+ * typed record; every problem is reported against its field in words a breeder understands;
  * `value` is present only when there are no errors. Warnings (such as an unusual gestation
  * length, 29–35 days being usual, common practice, no source) do not stop the row.
- * Cost O(number of fields). Throws only on a programming error (unknown field key).
+ * Building costs O(fields); a row O(fields). Throws only on a programming error (unknown field key).
  */
+export function rowValidator<K extends ImportKindKey>(
+  kind: K,
+  ctx: ImportContext,
+  columns: ColumnIndex,
+): (cells: readonly (string | undefined)[]) => RowValidation<ImportRecords[K]> {
+  const reader = new RowReader(importKind(kind, ctx.traits), ctx, columns);
+  const validate = validators[kind] as (r: RowReader, ctx: ImportContext) => RowValidation<ImportRecords[K]>;
+  return (cells) => {
+    reader.start(cells);
+    return validate(reader, ctx);
+  };
+}
+
+/** Checks one mapped row (field key → cell text); see rowValidator. O(fields). */
 export function validateRow<K extends ImportKindKey>(
   kind: K,
   mappedRow: Readonly<Record<string, string | undefined>>,
   ctx: ImportContext,
 ): RowValidation<ImportRecords[K]> {
-  const reader = new RowReader(mappedRow, ctx, importKind(kind, ctx.traits));
-  return validators[kind](reader, ctx);
+  const keys = Object.keys(mappedRow);
+  return rowValidator(kind, ctx, Object.fromEntries(keys.map((k, i) => [k, i])))(keys.map((k) => mappedRow[k]));
 }

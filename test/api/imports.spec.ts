@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import iconv from 'iconv-lite';
+import { Breed } from '../../analytics-api/src/db/entities/breed.entity';
 import { signIn, startTestApp, type TestApp } from '../support/test-app';
 
 let t: TestApp;
@@ -130,6 +131,67 @@ describe('import wizard API', () => {
     expect(history.body.imports).toHaveLength(2);
     const report = await officer.agent.get(`${base}/imports/${up.body.id}/problems.csv`).expect(200);
     expect(report.text).toContain('4,placing,error');
+  });
+
+  it('reports a share of the work strictly between 0 and 1 while a large results file is checked and imported', async () => {
+    const base = `/api/clubs/${c1}`;
+    const lines = ['show_name,show_date,judge,ear_id,exhibitor,breed,variety,sex,age_class,entries_in_class,exhibitors_in_class,placing,awards'];
+    for (let i = 0; i < 150_000; i++) {
+      lines.push(`Progress Show ${i % 40},2026-0${1 + (i % 9)}-1${i % 10},Judge ${i % 7},P${i},Exhibitor ${i % 300},Mini Rex,Black,${i % 2 ? 'buck' : 'doe'},junior,10,4,${1 + (i % 10)},`);
+    }
+    const up = await upload(officer, base, 'results', `${lines.join('\n')}\n`);
+    expect(up.body.progress).toBeNull();
+    const seen = { checking: [] as number[], committing: [] as number[] };
+    const follow = async (id: number) => {
+      for (;;) {
+        const { body } = await officer.agent.get(`${base}/imports/${id}`).expect(200);
+        if (body.status !== 'checking' && body.status !== 'committing') return body;
+        seen[body.status as 'checking' | 'committing'].push(body.progress);
+        await new Promise((r) => setTimeout(r, 5));
+      }
+    };
+    await officer.agent.post(`${base}/imports/${up.body.id}/check`).set('x-csrf-token', officer.csrfToken).send({ mapping: up.body.suggestedMapping }).expect(202);
+    const checked = await follow(up.body.id);
+    expect(checked.summary).toMatchObject({ totalRows: 150_000, newRows: 150_000, errorRows: 0 });
+    expect(checked.progress).toBeNull();
+    await officer.agent.post(`${base}/imports/${up.body.id}/commit`).set('x-csrf-token', officer.csrfToken).send({}).expect(202);
+    const done = await follow(up.body.id);
+    expect(done.message).toBe('150000 new, 0 already present');
+    for (const phase of ['checking', 'committing'] as const) {
+      expect(seen[phase].some((p) => p > 0 && p < 1), `${phase}: ${seen[phase].join(' ')}`).toBe(true);
+      expect([...seen[phase]].sort((a, b) => a - b)).toEqual(seen[phase]); // it never goes back
+    }
+  });
+
+  it('offers the trait columns of the herd\'s breed templates and checks each score against its animal\'s template', async () => {
+    const base = `/api/rabbitries/${r1}`;
+    // An invented breed whose template has a trait the default template lacks.
+    const marked = await t.db.getRepository(Breed).save({
+      name: 'Test Marked', classScheme: 'four-class', varieties: ['Broken'], weightLimits: {}, sourceNote: 'invented for a test',
+      evaluationTemplate: { traits: [{ key: 'markings', label: 'Markings', points: 25 }, { key: 'body_type', label: 'Body type', points: 40 }, { key: 'fur', label: 'Fur', points: 20 }] },
+    });
+    await t.db.query("INSERT INTO animal (rabbitry_id, ear_id, sex, breed_id) VALUES (?, 'TM1', 'doe', ?)", [r1, marked.id]);
+    const csv = 'Tattoo,Date,Body type,Markings,Fur,Condition\n' +
+      'FH1,2026-06-01,45,,30,10\n' + // Mini Rex (body type 50, fur 35, condition 15): fine
+      'TM1,2026-06-01,38,22,18,\n' + // Test Marked: fine
+      'TM1,2026-06-02,38,27,18,\n' + // markings above 25
+      'FH2,2026-06-01,40,10,,\n' + // Mini Rex has no markings
+      'TM1,2026-06-03,45,20,,\n' + // body type above Test Marked's 40 (though Mini Rex allows 50)
+      'TM1,2026-06-04,30,20,,5\n'; // Test Marked has no condition
+    const up = await upload(owner, base, 'evaluations', csv);
+    expect(up.status).toBe(201);
+    const traits = Object.fromEntries(up.body.evaluationTraits.map((tr: { key: string; points: number }) => [tr.key, tr.points]));
+    expect(traits).toMatchObject({ body_type: 50, fur: 35, condition: 15, markings: 25 });
+    expect(up.body.suggestedMapping).toMatchObject({ ear_id: 'Tattoo', evaluated_on: 'Date', body_type: 'Body type', markings: 'Markings', fur: 'Fur', condition: 'Condition' });
+    const checked = await check(owner, base, up.body.id, up.body.suggestedMapping);
+    expect(checked.summary).toMatchObject({ totalRows: 6, newRows: 2, errorRows: 4 });
+    const errors = checked.summary.problems.filter((p: { severity: string }) => p.severity === 'error').map((p: { row: number; field: string }) => `${p.row}:${p.field}`);
+    expect(errors).toEqual(['4:markings', '5:markings', '6:body_type', '7:condition']);
+    expect(checked.summary.problems.find((p: { row: number }) => p.row === 5).message).toContain('Markings is not a trait of this animal\'s breed template');
+    const done = await commit(owner, base, up.body.id, { skipRowsWithErrors: true });
+    expect(done.body.message).toBe('2 new, 0 already present');
+    const [tm1] = await t.db.query("SELECT e.scores FROM evaluation e JOIN animal a ON a.id = e.animal_id WHERE a.ear_id = 'TM1'");
+    expect(typeof tm1.scores === 'string' ? JSON.parse(tm1.scores) : tm1.scores).toEqual({ markings: 22, body_type: 38, fur: 18 });
   });
 
   it('a member of the club cannot import results, a mentor cannot import animals', async () => {

@@ -1,9 +1,11 @@
+import { isUtf8 } from 'node:buffer';
 import { createReadStream } from 'node:fs';
-import { open } from 'node:fs/promises';
-import { Transform, type Readable } from 'node:stream';
+import { open, stat } from 'node:fs/promises';
 import iconv from 'iconv-lite';
 import Papa from 'papaparse';
+import type { ColumnIndex } from '@shared/imports/validate-row';
 import { AppError } from '../http/app-error';
+import { CsvSplitter } from './csv-splitter';
 
 export type CsvEncoding = 'utf-8' | 'windows-1252';
 
@@ -62,15 +64,27 @@ function looksBinary(sample: Buffer): boolean {
   return control > sample.length * 0.01;
 }
 
+/** Checks the file in 1 MiB pieces; a character cut at a piece's end is carried to the next. */
 async function isValidUtf8(path: string): Promise<boolean> {
-  const decoder = new TextDecoder('utf-8', { fatal: true });
-  try {
-    for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 })) decoder.decode(chunk as Buffer, { stream: true });
-    decoder.decode();
-    return true;
-  } catch {
-    return false;
+  let carry: Buffer | null = null;
+  for await (const piece of createReadStream(path, { highWaterMark: 1 << 20 }) as AsyncIterable<Buffer>) {
+    const bytes: Buffer = carry ? Buffer.concat([carry, piece]) : piece;
+    const whole = bytes.length - incompleteTail(bytes);
+    if (!isUtf8(bytes.subarray(0, whole))) return false;
+    carry = whole < bytes.length ? Buffer.from(bytes.subarray(whole)) : null;
   }
+  return carry === null;
+}
+
+/** How many bytes at the end begin a UTF-8 character that the bytes do not finish (0–3). */
+function incompleteTail(bytes: Buffer): number {
+  for (let back = 1; back <= Math.min(3, bytes.length); back++) {
+    const b = bytes[bytes.length - back]!;
+    if ((b & 0xc0) === 0x80) continue; // a continuation byte: look further back
+    const length = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : b >= 0xc0 ? 2 : 1;
+    return length > back ? back : 0;
+  }
+  return 0;
 }
 
 function decodeSample(sample: Buffer, encoding: CsvEncoding): string {
@@ -79,78 +93,56 @@ function decodeSample(sample: Buffer, encoding: CsvEncoding): string {
   return text.replace(/^\uFEFF/, '').replace(/\uFFFD$/, '');
 }
 
-/** The file as decoded text (BOM removed). */
-function textStream(path: string, encoding: CsvEncoding): Readable {
-  // iconv's decode stream is a Readable at run time; its typings say ReadWriteStream.
-  const raw = createReadStream(path, { highWaterMark: 1 << 20 });
-  if (encoding === 'windows-1252') return raw.pipe(iconv.decodeStream('win1252')) as unknown as Readable;
-  const decoder = new TextDecoder('utf-8');
-  let first = true;
-  return raw.pipe(new Transform({
-    transform(chunk: Buffer, _enc, cb) {
-      let s = decoder.decode(chunk, { stream: true });
-      if (first) { s = s.replace(/^\uFEFF/, ''); first = false; }
-      cb(null, s);
-    },
-    flush(cb) { cb(null, decoder.decode()); },
-  }));
+/** A chunk of data rows and how far into the file they reach. */
+export interface CsvChunk {
+  /** The spreadsheet row number of rows[0] (the header is row 1). */
+  firstRow: number;
+  rows: string[][];
+  bytesRead: number;
+  fileBytes: number;
 }
 
 /**
  * Streams the data rows (after the header) in chunks of arrays of cells, numbered as a
- * spreadsheet shows them (header = 1; lines of nothing but spaces are left out). Quoted fields may hold delimiters and newlines. Papa Parse
- * hands over a chunk of rows at a time and is paused until the consumer has taken them, so
- * memory stays bounded. O(file size) time.
+ * spreadsheet shows them (header = 1; lines of nothing but spaces are left out). Quoted fields
+ * may hold delimiters and line breaks (see CsvSplitter). The file is read 128 KiB at a time
+ * (about 1,300 rows; small enough that a chunk's rows are collected young) and the consumer
+ * takes a chunk before the next is read, so memory stays bounded whatever the file's size.
+ * O(file size) time.
  */
-export async function* csvRows(path: string, shape: Pick<CsvShape, 'encoding' | 'delimiter'>): AsyncGenerator<{ firstRow: number; rows: string[][] }> {
-  const chunks: string[][][] = [];
-  let parser: Papa.Parser | null = null;
-  let finished = false;
-  let failure: Error | null = null;
-  let wake: (() => void) | null = null;
-  const signal = () => { const w = wake; wake = null; w?.(); };
-  Papa.parse(textStream(path, shape.encoding) as unknown as File, {
-    delimiter: shape.delimiter,
-    skipEmptyLines: true,
-    chunkSize: 1 << 20,
-    chunk: (res: Papa.ParseResult<string[]>, p: Papa.Parser) => {
-      parser = p;
-      p.pause();
-      chunks.push(res.data);
-      signal();
-    },
-    complete: () => { finished = true; signal(); },
-    error: (e: Error) => { failure = e; signal(); },
-  });
-  // Rows go out a chunk at a time: one await per row would cost more than the parsing.
+export async function* csvRows(path: string, shape: Pick<CsvShape, 'encoding' | 'delimiter'>): AsyncGenerator<CsvChunk> {
+  const { size: fileBytes } = await stat(path);
+  const decoder = shape.encoding === 'utf-8' ? new TextDecoder('utf-8') : null;
+  const splitter = new CsvSplitter(shape.delimiter);
+  let bytesRead = 0;
   let row = 1;
   let header = true;
-  for (;;) {
-    const next = chunks.shift();
-    if (next) {
-      let rows = next;
-      if (header) { rows = rows.slice(1); header = false; }
-      rows = rows.filter((cells) => cells.length > 1 || cells[0].trim() !== '');
-      yield { firstRow: row + 1, rows };
-      row += rows.length;
-      if (!finished) (parser as Papa.Parser | null)?.resume();
-      continue;
+  const chunk = (records: string[][]): CsvChunk => {
+    let rows = records.filter((cells) => cells.length > 1 || cells[0]!.trim() !== '');
+    if (header && rows.length) {
+      rows = rows.slice(1);
+      header = false;
     }
-    if (failure) throw failure;
-    if (finished) return;
-    await new Promise<void>((r) => { wake = r; });
-  }
-}
-
-/** Turns a row of cells into field key → cell text through the user's column mapping. */
-export function mapper(headers: string[], mapping: Record<string, string>): (cells: string[]) => Record<string, string> {
-  const pairs = Object.entries(mapping)
-    .filter(([, header]) => header)
-    .map(([field, header]) => [field, headers.indexOf(header)] as const)
-    .filter(([, i]) => i >= 0);
-  return (cells) => {
-    const out: Record<string, string> = {};
-    for (const [field, i] of pairs) out[field] = cells[i] ?? '';
+    const out = { firstRow: row + 1, rows, bytesRead, fileBytes };
+    row += rows.length;
     return out;
   };
+  for await (const piece of createReadStream(path, { highWaterMark: 1 << 17 }) as AsyncIterable<Buffer>) {
+    let text = decoder ? decoder.decode(piece, { stream: true }) : iconv.decode(piece, 'win1252');
+    if (bytesRead === 0) text = text.replace(/^\uFEFF/, '');
+    bytesRead += piece.length;
+    yield chunk(splitter.push(text));
+  }
+  const rest = decoder ? splitter.push(decoder.decode()) : [];
+  yield chunk([...rest, ...splitter.end()]);
+}
+
+/** Where each mapped field's cells sit in the file's rows: field key → column index. */
+export function columnIndex(headers: string[], mapping: Record<string, string>): ColumnIndex {
+  const columns: Record<string, number> = {};
+  for (const [field, header] of Object.entries(mapping)) {
+    const i = header ? headers.indexOf(header) : -1;
+    if (i >= 0) columns[field] = i;
+  }
+  return columns;
 }

@@ -16,5 +16,6 @@ describe('HashRowSet', () => {
     expect(set.size).toBe(50_000);
     expect(set.get(sha1('record-123'))).toBe(123);
     expect(set.has(sha1('never added'))).toBe(false);
+    expect(set.has(sha1('record-123').toUpperCase())).toBe(true);
   });
 });

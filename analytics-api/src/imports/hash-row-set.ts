@@ -1,3 +1,13 @@
+/** Eight hex digits from `at` as an unsigned 32-bit number, without cutting a substring. */
+function hex32(hex: string, at: number): number {
+  let n = 0;
+  for (let i = at; i < at + 8; i++) {
+    const c = hex.charCodeAt(i);
+    n = n * 16 + (c <= 57 ? c - 48 : (c | 32) - 87);
+  }
+  return n;
+}
+
 /**
  * A set of 40-hex SHA-1 digests, each remembered with the row it was first seen on, in flat
  * typed arrays (open addressing, linear probing on the first 64 bits of the digest). A Map of
@@ -24,7 +34,7 @@ export class HashRowSet {
 
   /** The row the digest was first added with, or undefined. */
   get(hex: string): number | undefined {
-    const i = this.find(parseInt(hex.slice(0, 8), 16), parseInt(hex.slice(8, 16), 16));
+    const i = this.find(hex32(hex, 0), hex32(hex, 8));
     return this.rows[i] >= 0 ? this.rows[i] : undefined;
   }
 
@@ -34,8 +44,8 @@ export class HashRowSet {
 
   /** Adds the digest with its row unless present; returns the row it already had, if any. */
   add(hex: string, row = 0): number | undefined {
-    const h = parseInt(hex.slice(0, 8), 16);
-    const l = parseInt(hex.slice(8, 16), 16);
+    const h = hex32(hex, 0);
+    const l = hex32(hex, 8);
     const i = this.find(h, l);
     if (this.rows[i] >= 0) return this.rows[i];
     this.hi[i] = h;

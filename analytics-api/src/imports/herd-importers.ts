@@ -1,20 +1,27 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { DEFAULT_EVALUATION_TRAITS, type Breed as DomainBreed, type EvaluationTrait } from '@shared/domain/breed';
 import { ageInDays } from '@shared/domain/age-class';
-import type { ImportRecords } from '@shared/imports/import-records';
+import type { ImportContext, ImportRecords, RowValidation } from '@shared/imports/import-records';
 import { plausibleWeightRange } from '@shared/imports/plausible-weight-range';
-import { validateRow } from '@shared/imports/validate-row';
+import { traitsToMap } from '@shared/imports/traits-to-map';
+import { rowValidator } from '@shared/imports/validate-row';
 import { formatWeight } from '@shared/units/weight';
 import { Animal } from '../db/entities/animal.entity';
 import { Breed } from '../db/entities/breed.entity';
 import { Evaluation } from '../db/entities/evaluation.entity';
 import { Litter } from '../db/entities/litter.entity';
 import { WeightRecord } from '../db/entities/weight-record.entity';
-import type { CheckReport, ImporterContext, KindImporter } from './kind-importer';
+import type { CheckReport, CommitProgress, ImporterContext, KindImporter } from './kind-importer';
 
 interface HerdAnimal { id: number; earId: string; sex: 'buck' | 'doe'; birthDate: string | null; breedId: number | null }
 
 const BATCH = 1000;
+
+/** A breed's evaluation traits; the default traits for no breed or a breed without a template. */
+function traitsOfBreed(breed: Breed | undefined): readonly EvaluationTrait[] {
+  const traits = (breed?.evaluationTemplate as { traits?: EvaluationTrait[] } | null | undefined)?.traits;
+  return traits?.length ? traits : DEFAULT_EVALUATION_TRAITS;
+}
 
 /** What every herd importer needs: the rabbitry's animals by ear ID and the breed catalogue. */
 class HerdContext {
@@ -35,8 +42,7 @@ class HerdContext {
   }
 
   traitsOf(breedId: number | null): readonly EvaluationTrait[] {
-    const t = breedId ? (this.breedsById.get(breedId)?.evaluationTemplate as { traits?: EvaluationTrait[] } | null)?.traits : null;
-    return t?.length ? t : DEFAULT_EVALUATION_TRAITS;
+    return traitsOfBreed(breedId ? this.breedsById.get(breedId) : undefined);
   }
 
   domainBreed(breedId: number | null): DomainBreed | null {
@@ -62,16 +68,22 @@ class Stubs {
   }
 }
 
-abstract class HerdImporter<K extends 'animals' | 'weights' | 'litters' | 'evaluations'> implements KindImporter<K> {
+type HerdKind = 'animals' | 'weights' | 'litters' | 'evaluations';
+
+abstract class HerdImporter<K extends HerdKind> implements KindImporter<K> {
   protected readonly accepted: { row: number; record: ImportRecords[K] }[] = [];
   protected readonly stubs = new Stubs();
   constructor(protected readonly herd: HerdContext, protected readonly ctx: ImporterContext) {}
-  abstract validate(mapped: Record<string, string>): ReturnType<typeof validateRow<K>>;
+  abstract readonly validate: (cells: readonly string[]) => RowValidation<ImportRecords[K]>;
   abstract accept(record: ImportRecords[K], row: number, keyHash: string, report: CheckReport): void;
   async finishCheck(report: CheckReport): Promise<void> {
     report.stubsToCreate = [...this.stubs.wanted.keys()].filter((e) => !this.herd.animals.has(e)).length;
   }
-  abstract commit(tx: EntityManager): Promise<number>;
+  abstract commit(tx: EntityManager, progress: CommitProgress): Promise<number>;
+
+  protected validator<V extends HerdKind>(kind: V, extra: Partial<ImportContext> = {}) {
+    return rowValidator(kind, { ...this.baseCtx(), ...extra }, this.ctx.columns);
+  }
 
   protected baseCtx() {
     return { dateOrder: this.ctx.options.dateOrder, unitSetting: this.ctx.unitSetting, today: this.ctx.today };
@@ -94,9 +106,7 @@ abstract class HerdImporter<K extends 'animals' | 'weights' | 'litters' | 'evalu
 export class AnimalsImporter extends HerdImporter<'animals'> {
   private readonly inFile = new Map<string, 'buck' | 'doe'>();
 
-  validate(mapped: Record<string, string>) {
-    return validateRow('animals', mapped, this.baseCtx());
-  }
+  readonly validate = this.validator('animals');
 
   accept(r: ImportRecords['animals'], row: number, _hash: string, report: CheckReport): void {
     if (!this.herd.breedsByName.has(r.breed.toLowerCase())) {
@@ -126,7 +136,7 @@ export class AnimalsImporter extends HerdImporter<'animals'> {
     await super.finishCheck(report);
   }
 
-  async commit(tx: EntityManager): Promise<number> {
+  async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     const rabbitryId = this.ctx.scopeId;
     await this.stubs.insert(tx, rabbitryId, this.herd);
     const rows = this.accepted.map(({ record: r }) => ({
@@ -138,14 +148,16 @@ export class AnimalsImporter extends HerdImporter<'animals'> {
     for (let i = 0; i < rows.length; i += BATCH) {
       const saved = await tx.getRepository(Animal).save(rows.slice(i, i + BATCH), { chunk: BATCH });
       for (const a of saved) this.herd.animals.set(a.earId, { id: a.id, earId: a.earId, sex: a.sex, birthDate: a.birthDate, breedId: a.breedId });
+      progress((i + saved.length) / rows.length / 2, i + saved.length); // the parent links below are the other half
     }
     // Parents are linked once every animal of the file has an id (a parent may come later in the file).
-    for (const { record: r } of this.accepted) {
+    for (const [k, { record: r }] of this.accepted.entries()) {
       const sire = r.sireEarId ? this.herd.animals.get(r.sireEarId) : undefined;
       const dam = r.damEarId ? this.herd.animals.get(r.damEarId) : undefined;
       if (sire || dam) {
         await tx.query('UPDATE animal SET sire_id = ?, dam_id = ? WHERE id = ?', [sire?.id ?? null, dam?.id ?? null, this.herd.animals.get(r.earId)!.id]);
       }
+      progress(0.5 + (k + 1) / this.accepted.length / 2, rows.length);
     }
     return rows.length;
   }
@@ -162,9 +174,7 @@ export class WeightsImporter extends HerdImporter<'weights'> {
     return imp;
   }
 
-  validate(mapped: Record<string, string>) {
-    return validateRow('weights', mapped, this.baseCtx());
-  }
+  readonly validate = this.validator('weights');
 
   accept(r: ImportRecords['weights'], row: number, _hash: string, report: CheckReport): void {
     if (!this.resolveAnimal(r.earId, row, 'ear_id', report)) return;
@@ -191,10 +201,10 @@ export class WeightsImporter extends HerdImporter<'weights'> {
     this.accepted.push({ row, record: r });
   }
 
-  async commit(tx: EntityManager): Promise<number> {
+  async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     await this.stubs.insert(tx, this.ctx.scopeId, this.herd);
     const rows = this.accepted.map(({ record: r }) => ({ animalId: this.herd.animals.get(r.earId)!.id, weighedOn: r.weighedOn, grams: r.grams, notes: r.notes }));
-    return insertIgnore(tx, 'weight_record', ['animal_id', 'weighed_on', 'grams', 'notes'], rows.map((r) => [r.animalId, r.weighedOn, r.grams, r.notes]));
+    return insertIgnore(tx, 'weight_record', ['animal_id', 'weighed_on', 'grams', 'notes'], rows.map((r) => [r.animalId, r.weighedOn, r.grams, r.notes]), progress);
   }
 }
 
@@ -207,9 +217,7 @@ export class LittersImporter extends HerdImporter<'litters'> {
     return imp;
   }
 
-  validate(mapped: Record<string, string>) {
-    return validateRow('litters', mapped, this.baseCtx());
-  }
+  readonly validate = this.validator('litters');
 
   accept(r: ImportRecords['litters'], row: number, _hash: string, report: CheckReport): void {
     if (this.existing.has(r.litterCode.toUpperCase())) {
@@ -230,12 +238,12 @@ export class LittersImporter extends HerdImporter<'litters'> {
     this.accepted.push({ row, record: r });
   }
 
-  async commit(tx: EntityManager): Promise<number> {
+  async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     await this.stubs.insert(tx, this.ctx.scopeId, this.herd);
     const rows = this.accepted.map(({ record: r }) => [this.ctx.scopeId, r.litterCode, this.herd.animals.get(r.sireEarId)!.id,
       this.herd.animals.get(r.damEarId)!.id, r.bredOn, r.kindledOn, r.bornAlive, r.bornDead, r.weaned, r.weight21dGrams, r.notes]);
     const added = await insertIgnore(tx, 'litter', ['rabbitry_id', 'code', 'sire_id', 'dam_id', 'bred_on', 'kindled_on', 'born_alive',
-      'born_dead', 'weaned', 'weight_21d_grams', 'notes'], rows);
+      'born_dead', 'weaned', 'weight_21d_grams', 'notes'], rows, progress);
     // Kits already in the herd belong to the litter whose parents and kindling date they share.
     await tx.query(`UPDATE animal a JOIN litter l ON l.rabbitry_id = a.rabbitry_id AND l.sire_id = a.sire_id AND l.dam_id = a.dam_id
       AND l.kindled_on = a.birth_date SET a.litter_id = l.id WHERE a.rabbitry_id = ? AND a.litter_id IS NULL`, [this.ctx.scopeId]);
@@ -254,12 +262,20 @@ export class EvaluationsImporter extends HerdImporter<'evaluations'> {
     return imp;
   }
 
-  /** Scores are checked against the template of the animal's own breed. */
-  validate(mapped: Record<string, string>) {
-    const ear = (mapped.ear_id ?? '').trim().replace(/\s+/g, ' ').toUpperCase();
-    const traits = this.herd.traitsOf(this.herd.animals.get(ear)?.breedId ?? null);
-    return validateRow('evaluations', mapped, { ...this.baseCtx(), traits });
-  }
+  /** One checker per breed: scores are checked against the template of the animal's own breed. */
+  private readonly byBreed = new Map<number | null, (cells: readonly string[]) => RowValidation<ImportRecords['evaluations']>>();
+
+  readonly validate = (cells: readonly string[]) => {
+    const column = this.ctx.columns.ear_id;
+    const ear = column === undefined ? '' : (cells[column] ?? '').trim().replace(/\s+/g, ' ').toUpperCase();
+    const breedId = this.herd.animals.get(ear)?.breedId ?? null;
+    let check = this.byBreed.get(breedId);
+    if (!check) {
+      check = this.validator('evaluations', { traits: this.herd.traitsOf(breedId), mappedTraits: this.ctx.mappedTraits });
+      this.byBreed.set(breedId, check);
+    }
+    return check(cells);
+  };
 
   accept(r: ImportRecords['evaluations'], row: number, _hash: string, report: CheckReport): void {
     if (!this.resolveAnimal(r.earId, row, 'ear_id', report)) return;
@@ -272,23 +288,37 @@ export class EvaluationsImporter extends HerdImporter<'evaluations'> {
     this.accepted.push({ row, record: r });
   }
 
-  async commit(tx: EntityManager): Promise<number> {
+  async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     await this.stubs.insert(tx, this.ctx.scopeId, this.herd);
     const rows = this.accepted.map(({ record: r }) => [this.herd.animals.get(r.earId)!.id, r.evaluatedOn, r.evaluator, JSON.stringify(r.scores), r.notes]);
-    return insertIgnore(tx, 'evaluation', ['animal_id', 'evaluated_on', 'evaluator', 'scores', 'notes'], rows);
+    return insertIgnore(tx, 'evaluation', ['animal_id', 'evaluated_on', 'evaluator', 'scores', 'notes'], rows, progress);
   }
 }
 
 /** Batched multi-row INSERT IGNORE (unique keys make a re-import add nothing); returns rows added. */
-async function insertIgnore(tx: EntityManager, table: string, columns: string[], rows: unknown[][]): Promise<number> {
+async function insertIgnore(tx: EntityManager, table: string, columns: string[], rows: unknown[][], progress: CommitProgress): Promise<number> {
   let added = 0;
   for (let i = 0; i < rows.length; i += BATCH) {
     const batch = rows.slice(i, i + BATCH);
     const placeholders = batch.map(() => `(${columns.map(() => '?').join(',')})`).join(',');
     const res = await tx.query(`INSERT IGNORE INTO \`${table}\` (${columns.map((c) => `\`${c}\``).join(',')}) VALUES ${placeholders}`, batch.flat());
     added += Number(res.affectedRows ?? 0);
+    progress((i + batch.length) / rows.length, i + batch.length);
   }
   return added;
+}
+
+/**
+ * The trait columns an evaluations file for a rabbitry may map: those of the evaluation
+ * templates of the breeds its animals belong to (outside stubs aside; the default traits for
+ * animals without a breed or a breed without a template), or of the whole catalogue while the
+ * herd is empty.
+ */
+export async function evaluationTraitsFor(db: DataSource, rabbitryId: number): Promise<EvaluationTrait[]> {
+  const breeds = new Map((await db.getRepository(Breed).find()).map((b) => [b.id, b]));
+  const rows: { breed_id: number | null }[] = await db.query('SELECT DISTINCT breed_id FROM animal WHERE rabbitry_id = ? AND is_stub = 0', [rabbitryId]);
+  const herdBreeds = rows.length ? rows.map((r) => (r.breed_id === null ? undefined : breeds.get(r.breed_id))) : [...breeds.values()];
+  return traitsToMap(herdBreeds.map(traitsOfBreed));
 }
 
 export async function createHerdImporter(kind: 'animals' | 'weights' | 'litters' | 'evaluations', db: DataSource, ctx: ImporterContext) {

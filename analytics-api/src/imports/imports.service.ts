@@ -3,17 +3,18 @@ import { join } from 'node:path';
 import Papa from 'papaparse';
 import type { DataSource } from 'typeorm';
 import type { ImportCheckOptions, ImportJob as ImportJobDto, ImportSummary, RowProblem } from '@shared/contracts/imports';
-import { dedupeKey } from '@shared/imports/dedupe-key';
+import { dedupeKeyer } from '@shared/imports/dedupe-key';
 import { importKind, type ImportKindKey } from '@shared/imports/import-kinds';
 import { suggestMapping } from '@shared/imports/suggest-mapping';
 import { ImportJob } from '../db/entities/import-job.entity';
 import { SavedMapping } from '../db/entities/saved-mapping.entity';
 import { User } from '../db/entities/user.entity';
 import { AppError, notFound } from '../http/app-error';
-import { csvRows, mapper, sniffCsv } from './csv-file';
+import { columnIndex, csvRows, sniffCsv } from './csv-file';
 import { dedupeHash } from './dedupe-hash';
 import { HashRowSet } from './hash-row-set';
-import { createHerdImporter } from './herd-importers';
+import { createHerdImporter, evaluationTraitsFor } from './herd-importers';
+import { JobProgress } from './job-progress';
 import type { CheckReport, ImporterContext, KindImporter } from './kind-importer';
 import { ResultsImporter } from './results-importer';
 
@@ -49,13 +50,14 @@ export class ImportsService {
     }
     await mkdir(this.dir, { recursive: true });
     const saved = await this.db.getRepository(SavedMapping).findOneBy({ userId, kind });
-    const suggestion = suggestMapping(kind, shape.headers).fields;
+    const evaluationTraits = kind === 'evaluations' ? await evaluationTraitsFor(this.db, scope.id) : null;
+    const suggestion = suggestMapping(kind, shape.headers, evaluationTraits ?? undefined).fields;
     // A remembered mapping wins where its headers occur in this file.
     const remembered = Object.fromEntries(Object.entries(saved?.mapping ?? {}).filter(([, h]) => shape.headers.includes(h)));
     const job = await this.db.getRepository(ImportJob).save({
       kind, scopeType: scope.type, scopeId: scope.id, userId, fileName: file.originalname.slice(0, 255), status: 'uploaded',
       encoding: shape.encoding, delimiter: shape.delimiter, headers: shape.headers, sampleRows: shape.sampleRows,
-      suggestedMapping: { ...suggestion, ...remembered }, mapping: null, options: null, summary: null,
+      suggestedMapping: { ...suggestion, ...remembered }, mapping: null, options: null, summary: null, evaluationTraits,
     });
     const filePath = join(this.dir, `job-${job.id}.csv`);
     await rename(file.path, filePath);
@@ -86,22 +88,24 @@ export class ImportsService {
   async startCheck(scope: Scope, jobId: number, userId: number, unitSetting: 'lb-oz' | 'kg', options: ImportCheckOptions): Promise<ImportJobDto> {
     const job = await this.claim(scope, jobId, ['uploaded', 'checked', 'failed'], 'checking');
     const kind = job.kind as ImportKindKey;
-    const known = new Set(importKind(kind).fields.map((f) => f.key));
+    const known = new Set(importKind(kind, job.evaluationTraits ?? undefined).fields.map((f) => f.key));
     const unknown = Object.keys(options.mapping).filter((k) => !known.has(k));
     const missingHeaders = Object.values(options.mapping).filter((h) => h && !job.headers!.includes(h));
     if (unknown.length || missingHeaders.length) {
       await this.fail(job.id, 'The column mapping names fields or columns this file does not have');
       throw new AppError('validation', 'The column mapping names fields or columns this file does not have', 400, { mapping: [...unknown, ...missingHeaders].join(', ') });
     }
-    await this.db.getRepository(ImportJob).update({ id: job.id }, { mapping: options.mapping, options, processedRows: 0 });
+    await this.db.getRepository(ImportJob).update({ id: job.id }, { mapping: options.mapping, options, processedRows: 0, progress: 0 });
     await this.db.getRepository(SavedMapping).upsert({ userId, kind, mapping: options.mapping }, ['userId', 'kind']);
     const ctx = this.importerContext(job, userId, unitSetting, options);
     this.background(job.id, async () => {
       const importer = kind === 'results' ? await ResultsImporter.forCheck(this.db, ctx) : await createHerdImporter(kind, this.db, ctx);
-      const { summary, report } = await this.checkRows({ ...job, options }, importer);
+      const progress = new JobProgress(this.db, job.id);
+      const { summary, report } = await this.checkRows({ ...job, options }, importer, (f, rows) => progress.report(f, rows));
+      await progress.settled();
       await this.db.getRepository(ImportJob).update({ id: job.id }, {
         status: 'checked', summary, errorReport: report, totalRows: summary.totalRows, errorRows: summary.errorRows,
-        processedRows: summary.totalRows,
+        processedRows: summary.totalRows, progress: null,
       });
     });
     return this.get(scope, jobId);
@@ -115,23 +119,29 @@ export class ImportsService {
       throw new AppError('has-errors', `${current.summary!.errorRows} rows have errors: fix the file, or choose to leave those rows out`, 409);
     }
     const job = await this.claim(scope, jobId, ['checked'], 'committing');
+    await this.db.getRepository(ImportJob).update({ id: job.id }, { processedRows: 0, progress: 0 });
     const kind = job.kind as ImportKindKey;
     const ctx = this.importerContext(job, userId, unitSetting, job.options!);
     this.background(job.id, async () => {
+      const progress = new JobProgress(this.db, job.id);
       let importer: KindImporter<ImportKindKey>;
+      // Herd files are small: the commit checks them again against the database as it is now
+      // (the first half of the bar), then writes (the second half).
+      let written = (f: number, rows: number) => void progress.report(f, rows);
       if (kind === 'results') {
         importer = ResultsImporter.forCommit(this.db, ctx) as KindImporter<ImportKindKey>;
       } else {
-        // Herd files are small: the commit checks them again against the database as it is now.
         importer = await createHerdImporter(kind, this.db, ctx) as KindImporter<ImportKindKey>;
-        await this.checkRows(job, importer);
+        await this.checkRows(job, importer, (f) => progress.report(f / 2, 0));
+        written = (f, rows) => void progress.report(0.5 + f / 2, rows);
       }
-      const added = await this.db.transaction((tx) => importer.commit(tx));
+      const added = await this.db.transaction((tx) => importer.commit(tx, written));
+      await progress.settled();
       const summary = job.summary!;
       // Rows the check counted as new but another import added since then are present too.
       const present = summary.alreadyPresent + Math.max(0, summary.newRows - added);
       await this.db.getRepository(ImportJob).update({ id: job.id }, {
-        status: 'done', newRows: added, duplicateRows: present + summary.duplicatesInFile, finishedAt: new Date(),
+        status: 'done', newRows: added, processedRows: added, progress: null, duplicateRows: present + summary.duplicatesInFile, finishedAt: new Date(),
         message: `${added} new, ${present} already present${summary.duplicatesInFile ? `, ${summary.duplicatesInFile} repeated in the file` : ''}`,
       });
       await this.cleanUp(job);
@@ -149,11 +159,17 @@ export class ImportsService {
   }
 
   private importerContext(job: ImportJob, userId: number, unitSetting: 'lb-oz' | 'kg', options: ImportCheckOptions): ImporterContext {
-    return { scopeId: job.scopeId, jobId: job.id, userId, options, unitSetting, today: this.today(), stagingDir: this.dir };
+    return {
+      scopeId: job.scopeId, jobId: job.id, userId, options, columns: columnIndex(job.headers ?? [], options.mapping), unitSetting,
+      today: this.today(), stagingDir: this.dir, mappedTraits: job.evaluationTraits ?? undefined,
+    };
   }
 
-  /** The common loop of every kind: read, map, validate, drop in-file duplicates, classify. */
-  private async checkRows(job: ImportJob, importer: KindImporter<ImportKindKey>) {
+  /**
+   * The common loop of every kind: read, validate, drop in-file duplicates, classify. Reports
+   * the share of the file read after each chunk (see csvRows).
+   */
+  private async checkRows(job: ImportJob, importer: KindImporter<ImportKindKey>, progress: (fraction: number, rows: number) => Promise<unknown>) {
     const problems: RowProblem[] = [];
     const reportLines: string[] = [];
     const rowsWithError = new Set<number>();
@@ -167,17 +183,17 @@ export class ImportsService {
       },
     };
     const seen = new HashRowSet();
-    const map = mapper(job.headers!, job.options!.mapping);
+    const keyOf = dedupeKeyer(job.kind as ImportKindKey);
     let total = 0;
     let duplicatesInFile = 0;
     for await (const chunk of csvRows(job.filePath!, { encoding: job.encoding as 'utf-8', delimiter: job.delimiter! })) {
       for (let i = 0; i < chunk.rows.length; i++) {
         const row = chunk.firstRow + i;
-        const v = importer.validate(map(chunk.rows[i]));
+        const v = importer.validate(chunk.rows[i]!);
         for (const e of v.errors) report.problem(row, e.field, e.message, 'error');
         for (const w of v.warnings) report.problem(row, w.field, w.message, 'warning');
         if (!v.value) continue;
-        const hash = dedupeHash(dedupeKey(job.kind as ImportKindKey, v.value));
+        const hash = dedupeHash(keyOf(v.value));
         const first = seen.add(hash, row);
         if (first !== undefined) {
           duplicatesInFile++;
@@ -187,7 +203,8 @@ export class ImportsService {
         importer.accept(v.value, row, hash, report);
       }
       total += chunk.rows.length;
-      await this.db.getRepository(ImportJob).update({ id: job.id }, { processedRows: total });
+      await importer.endChunk?.();
+      await progress(chunk.bytesRead / chunk.fileBytes, total);
     }
     await importer.finishCheck(report);
     if (total === 0) throw new AppError('no-rows', 'The file has no rows of data', 400);
@@ -234,7 +251,8 @@ function toDto(j: ImportJob, userName: string | null): ImportJobDto {
   return {
     id: j.id, kind: j.kind as ImportKindKey, scopeType: j.scopeType, scopeId: j.scopeId, fileName: j.fileName, status: j.status,
     encoding: j.encoding, delimiter: j.delimiter, headers: j.headers ?? [], sampleRows: j.sampleRows ?? [],
-    suggestedMapping: j.suggestedMapping ?? {}, processedRows: j.processedRows, totalRows: j.totalRows, summary: j.summary,
+    suggestedMapping: j.suggestedMapping ?? {}, evaluationTraits: j.evaluationTraits ?? null, processedRows: j.processedRows,
+    totalRows: j.totalRows, progress: ['checking', 'committing'].includes(j.status) ? j.progress ?? 0 : null, summary: j.summary,
     message: j.message, startedAt: new Date(j.startedAt).toISOString(), finishedAt: j.finishedAt ? new Date(j.finishedAt).toISOString() : null,
     userName,
   };

@@ -1,14 +1,15 @@
 import { createReadStream, createWriteStream, type WriteStream } from 'node:fs';
-import { readFile, writeFile } from 'node:fs/promises';
+import { readFile, stat, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
+import { Transform } from 'node:stream';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { ImportRecords } from '@shared/imports/import-records';
-import { validateRow } from '@shared/imports/validate-row';
+import { rowValidator } from '@shared/imports/validate-row';
 import { ClubMembership } from '../db/entities/club-membership.entity';
 import { Show } from '../db/entities/show.entity';
-import type { CheckReport, ImporterContext, KindImporter } from './kind-importer';
+import type { CheckReport, CommitProgress, ImporterContext, KindImporter } from './kind-importer';
 import { HashRowSet } from './hash-row-set';
-import { tsvField } from './tsv';
+import { TsvLines, tsvField } from './tsv';
 
 type Result = ImportRecords['results'];
 interface StagedShow { id: number | null; name: string; showDate: string; location: string | null; sanctionNo: string | null; judges: string[] }
@@ -28,8 +29,13 @@ export class ResultsImporter implements KindImporter<'results'> {
   private memberHerds = new Map<string, number>();
   private animalsByHerd = new Map<number, Map<string, number>>();
   private out: WriteStream | null = null;
+  private lines: TsvLines | null = null;
+  /** The last row's show and exhibitor, as written: most rows repeat them. */
+  private lastShow = { name: '', date: '', index: -1 };
+  private readonly herdOfExhibitor = new Map<string, number | null>();
   private readonly tsvPath: string;
   private readonly showsPath: string;
+  readonly validate = rowValidator('results', { dateOrder: this.ctx.options.dateOrder, unitSetting: this.ctx.unitSetting, today: this.ctx.today }, this.ctx.columns);
 
   constructor(private readonly db: DataSource, private readonly ctx: ImporterContext) {
     this.tsvPath = join(ctx.stagingDir, `job-${ctx.jobId}.results.tsv`);
@@ -77,10 +83,7 @@ export class ResultsImporter implements KindImporter<'results'> {
       for (const r of rows) this.existingKeys.add(r.k);
     }
     this.out = createWriteStream(this.tsvPath, { highWaterMark: 1 << 20 });
-  }
-
-  validate(mapped: Record<string, string>) {
-    return validateRow('results', mapped, { dateOrder: this.ctx.options.dateOrder, unitSetting: this.ctx.unitSetting, today: this.ctx.today });
+    this.lines = new TsvLines(this.out);
   }
 
   accept(r: Result, _row: number, keyHash: string, report: CheckReport): void {
@@ -88,6 +91,19 @@ export class ResultsImporter implements KindImporter<'results'> {
       report.alreadyPresent++;
       return;
     }
+    const index = this.showIndex(r);
+    const show = this.staged[index]!;
+    if (show.id === null && !show.judges.includes(r.judge)) show.judges.push(r.judge);
+    const herd = this.memberHerd(r.exhibitor);
+    const animalId = herd !== null && r.earId ? this.animalsByHerd.get(herd)?.get(r.earId) ?? null : null;
+    report.newRows++;
+    // ELT() in the commit is 1-based.
+    this.lines!.add(`${index + 1}\t${animalId ?? '\\N'}\t${tsvField(r.earId)}\t${tsvField(r.exhibitor)}\t${tsvField(r.breed)}\t${tsvField(r.variety)}\t${r.sex}\t${r.ageClass}\t${r.entriesInClass}\t${r.exhibitorsInClass}\t${r.placing}\t${r.awards.join(' ')}\t${tsvField(r.judge)}\t${keyHash}\n`);
+  }
+
+  private showIndex(r: Result): number {
+    const last = this.lastShow;
+    if (last.name === r.showName && last.date === r.showDate) return last.index;
     const showKey = `${norm(r.showName)}|${r.showDate}`;
     let index = this.shows.get(showKey);
     if (index === undefined) {
@@ -95,24 +111,35 @@ export class ResultsImporter implements KindImporter<'results'> {
       this.shows.set(showKey, index);
       this.staged.push({ id: null, name: r.showName, showDate: r.showDate, location: r.location, sanctionNo: r.sanctionNo, judges: [] });
     }
-    const show = this.staged[index];
-    if (show.id === null && !show.judges.includes(r.judge)) show.judges.push(r.judge);
-    const herd = this.memberHerds.get(norm(r.exhibitor));
-    const animalId = herd !== undefined && r.earId ? this.animalsByHerd.get(herd)?.get(r.earId) ?? null : null;
-    report.newRows++;
-    // ELT() in the commit is 1-based.
-    const line = [index + 1, animalId, r.earId, r.exhibitor, r.breed, r.variety, r.sex, r.ageClass, r.entriesInClass,
-      r.exhibitorsInClass, r.placing, r.awards.join(' '), r.judge, keyHash].map(tsvField).join('\t');
-    this.out!.write(`${line}\n`);
+    this.lastShow = { name: r.showName, date: r.showDate, index };
+    return index;
+  }
+
+  /** The member's herd an exhibitor name belongs to (names as written are few; each is normalised once). */
+  private memberHerd(exhibitor: string): number | null {
+    let herd = this.herdOfExhibitor.get(exhibitor);
+    if (herd === undefined) {
+      herd = this.memberHerds.get(norm(exhibitor)) ?? null;
+      if (this.herdOfExhibitor.size < 100_000) this.herdOfExhibitor.set(exhibitor, herd);
+    }
+    return herd;
+  }
+
+  async endChunk(): Promise<void> {
+    await this.lines!.drained();
   }
 
   async finishCheck(): Promise<void> {
+    await this.endChunk();
     await new Promise<void>((resolve, reject) => this.out!.end((e?: Error | null) => (e ? reject(e) : resolve())));
     await writeFile(this.showsPath, JSON.stringify(this.staged));
   }
 
-  /** Uses the staged files of the check; nothing is parsed again. */
-  async commit(tx: EntityManager): Promise<number> {
+  /**
+   * Uses the staged files of the check; nothing is parsed again. One LOAD DATA of every staged
+   * row; IGNORE skips a row another import added since the check (the unique dedupe key).
+   */
+  async commit(tx: EntityManager, progress: CommitProgress): Promise<number> {
     const staged: StagedShow[] = JSON.parse(await readFile(this.showsPath, 'utf8'));
     const ids: number[] = [];
     for (const s of staged) {
@@ -131,11 +158,26 @@ export class ResultsImporter implements KindImporter<'results'> {
       (@show_index, animal_id, ear_id, exhibitor, breed, variety, sex, age_class, entries_in_class,
        exhibitors_in_class, placing, awards, judge, @dedupe_hex)
       SET dedupe_key = UNHEX(@dedupe_hex), show_id = ELT(@show_index, ${ids.join(',')}), import_job_id = ${Number(this.ctx.jobId)}`;
+    const { size } = await stat(this.tsvPath);
     const conn = await tx.queryRunner!.connect();
     const result = await new Promise<{ affectedRows: number }>((resolve, reject) => {
-      conn.query({ sql, infileStreamFactory: () => createReadStream(this.tsvPath, { highWaterMark: 1 << 20 }) },
+      conn.query({ sql, infileStreamFactory: () => createReadStream(this.tsvPath, { highWaterMark: 1 << 20 }).pipe(counted(size, progress)) },
         (err: Error | null, res: { affectedRows: number }) => (err ? reject(err) : resolve(res)));
     });
     return result.affectedRows;
   }
+}
+
+/** Passes the staged file to the server unchanged, reporting the share sent and the lines in it. */
+function counted(size: number, progress: CommitProgress): Transform {
+  let bytes = 0;
+  let lines = 0;
+  return new Transform({
+    transform(piece: Buffer, _enc, done) {
+      bytes += piece.length;
+      for (let at = piece.indexOf(10); at !== -1; at = piece.indexOf(10, at + 1)) lines++;
+      progress(size ? bytes / size : 1, lines);
+      done(null, piece);
+    },
+  });
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { EAR_ID_MAX_LENGTH } from '@shared/domain/terms';
 
 export type AnimalSex = 'buck' | 'doe';
 export type AnimalStatus = 'active' | 'sold' | 'deceased' | 'culled';
@@ -12,7 +13,7 @@ export type AnimalStatus = 'active' | 'sold' | 'deceased' | 'culled';
 export class Animal {
   @PrimaryGeneratedColumn({ type: 'int' }) id: number;
   @Column({ type: 'int', name: 'rabbitry_id' }) rabbitryId: number;
-  @Column({ type: 'varchar', length: 32, name: 'ear_id' }) earId: string;
+  @Column({ type: 'varchar', length: EAR_ID_MAX_LENGTH, name: 'ear_id' }) earId: string;
   @Column({ type: 'varchar', length: 120, nullable: true }) name: string | null;
   @Column({ type: 'varchar', length: 4 }) sex: AnimalSex;
   @Index() @Column({ type: 'int', name: 'breed_id', nullable: true }) breedId: number | null;

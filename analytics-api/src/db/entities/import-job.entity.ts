@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 import type { ImportCheckOptions, ImportStatus, ImportSummary } from '@shared/contracts/imports';
+import type { EvaluationTrait } from '@shared/domain/breed';
 
 @Entity('import_job')
 @Index(['scopeType', 'scopeId'])
@@ -13,6 +14,8 @@ export class ImportJob {
   @Column({ type: 'varchar', length: 12 }) status: ImportStatus;
   @Column({ type: 'int', name: 'total_rows', default: 0 }) totalRows: number;
   @Column({ type: 'int', name: 'processed_rows', default: 0 }) processedRows: number;
+  /** Share of the running check or commit done (0–1); null before the first report. */
+  @Column({ type: 'double', nullable: true }) progress: number | null;
   @Column({ type: 'int', name: 'new_rows', default: 0 }) newRows: number;
   @Column({ type: 'int', name: 'duplicate_rows', default: 0 }) duplicateRows: number;
   @Column({ type: 'int', name: 'error_rows', default: 0 }) errorRows: number;
@@ -29,6 +32,8 @@ export class ImportJob {
   @Column({ type: 'json', name: 'suggested_mapping', nullable: true }) suggestedMapping: Record<string, string> | null;
   @Column({ type: 'json', nullable: true }) options: ImportCheckOptions | null;
   @Column({ type: 'json', nullable: true }) summary: ImportSummary | null;
+  /** Evaluations: the trait columns offered for mapping (the herd's breed templates). */
+  @Column({ type: 'json', name: 'evaluation_traits', nullable: true }) evaluationTraits: EvaluationTrait[] | null;
   @CreateDateColumn({ type: 'datetime', name: 'started_at' }) startedAt: Date;
   @Column({ type: 'datetime', name: 'finished_at', nullable: true }) finishedAt: Date | null;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { EAR_ID_MAX_LENGTH } from '@shared/domain/terms';
 
 /** One placing of one animal in one class at one show. */
 @Entity('show_result')
@@ -8,7 +9,7 @@ export class ShowResult {
   @Column({ type: 'int', name: 'show_id' }) showId: number;
   /** Null while the ear ID matches no animal in a member's herd. */
   @Index() @Column({ type: 'int', name: 'animal_id', nullable: true }) animalId: number | null;
-  @Column({ type: 'varchar', length: 32, name: 'ear_id', nullable: true }) earId: string | null;
+  @Column({ type: 'varchar', length: EAR_ID_MAX_LENGTH, name: 'ear_id', nullable: true }) earId: string | null;
   @Index() @Column({ type: 'varchar', length: 120 }) exhibitor: string;
   @Column({ type: 'varchar', length: 80 }) breed: string;
   @Column({ type: 'varchar', length: 80, nullable: true }) variety: string | null;

@@ -10,6 +10,7 @@ describe('column mapping', () => {
       ['weight_g', true, 'Weight (with unit) or Weight in grams'],
       ['notes', false, null],
     ]);
+    expect(fields[2]!.hint).toBe('One of: Weight (with unit) or Weight in grams.');
   });
 
   it('drops fields left out of the file', () => {
@@ -31,6 +32,23 @@ describe('column mapping', () => {
     expect(unusedHeaders(['Tattoo', 'Date', 'Pen', ''], { ear_id: 'Tattoo', weighed_on: 'Date' })).toEqual(['Pen']);
     expect(fieldLabel('results', 'age_class')).toBe('Age class');
     expect(fieldLabel('results', '')).toBe('whole row');
+  });
+
+  it('offers the trait columns of the herd’s breed templates for an evaluations file', () => {
+    const traits = [{ key: 'body_type', label: 'Body type', points: 50 }, { key: 'markings', label: 'Markings', points: 25 }];
+    expect(mappingFields('evaluations', traits).map((f) => [f.key, f.label, f.group, f.hint])).toEqual([
+      ['ear_id', 'Ear ID (tattoo)', null, ''],
+      ['evaluated_on', 'Evaluated on', null, ''],
+      ['evaluator', 'Evaluator', null, ''],
+      ['body_type', 'Body type (0–50)', 'Body type (0–50) or Markings (0–25)', 'At least one score is needed.'],
+      ['markings', 'Markings (0–25)', 'Body type (0–50) or Markings (0–25)', 'At least one score is needed.'],
+      ['notes', 'Notes', null, ''],
+    ]);
+    expect(mappingProblems('evaluations', { ear_id: 'Tattoo', evaluated_on: 'Date', markings: 'Marks' }, traits)).toEqual([]);
+    expect(mappingProblems('evaluations', { ear_id: 'Tattoo', evaluated_on: 'Date' }, traits)).toEqual([
+      'Choose a column for Body type (0–50) or Markings (0–25)',
+    ]);
+    expect(fieldLabel('evaluations', 'markings', traits)).toBe('Markings (0–25)');
   });
 
   it('notices a file of another kind than the one chosen', () => {

@@ -1,3 +1,4 @@
+import type { EvaluationTrait } from '@shared/domain/breed';
 import { importKind, type ImportField, type ImportKindKey } from '@shared/imports/import-kinds';
 import { suggestMapping } from '@shared/imports/suggest-mapping';
 
@@ -7,21 +8,30 @@ export interface MappingField {
   /** Required alone, or as one of a group of which one must be mapped. */
   required: boolean;
   group: string | null;
+  /** A few words under the field: what its group asks for. */
+  hint: string;
 }
 
+/** Evaluations: the trait columns the API offers for this herd (its breeds' templates); other kinds ignore it. */
+type Traits = readonly EvaluationTrait[] | null | undefined;
+
 /** The fields of a kind as the mapping step lists them, required ones first within the kind's order. O(fields). */
-export function mappingFields(kind: ImportKindKey): MappingField[] {
-  const definition = importKind(kind);
-  const grouped = new Map<string, string>();
+export function mappingFields(kind: ImportKindKey, traits?: Traits): MappingField[] {
+  const definition = importKind(kind, traits ?? undefined);
+  const grouped = new Map<string, { words: string; hint: string }>();
   for (const group of definition.requiredOneOf) {
-    const words = group.map((k) => definition.fields.find((f) => f.key === k)?.label ?? k).join(' or ');
-    for (const key of group) grouped.set(key, words);
+    const fields = group.map((k) => definition.fields.find((f) => f.key === k));
+    const words = group.map((k, i) => fields[i]?.label ?? k).join(' or ');
+    // A template's trait scores make a long group: the hint says what it asks, not every name.
+    const hint = fields.every((f) => f?.type === 'score') ? 'At least one score is needed.' : `One of: ${words}.`;
+    for (const key of group) grouped.set(key, { words, hint });
   }
   return definition.fields.map((f: ImportField) => ({
     key: f.key,
     label: f.label,
     required: f.required || grouped.has(f.key),
-    group: grouped.get(f.key) ?? null,
+    group: grouped.get(f.key)?.words ?? null,
+    hint: grouped.get(f.key)?.hint ?? '',
   }));
 }
 
@@ -34,8 +44,8 @@ export function cleanMapping(mapping: Record<string, string | null | undefined>)
  * What still stops the check: required fields without a column, groups of which no field has
  * one, and columns chosen for two fields. In words for the breeder. O(fields).
  */
-export function mappingProblems(kind: ImportKindKey, mapping: Record<string, string>): string[] {
-  const definition = importKind(kind);
+export function mappingProblems(kind: ImportKindKey, mapping: Record<string, string>, traits?: Traits): string[] {
+  const definition = importKind(kind, traits ?? undefined);
   const problems: string[] = [];
   for (const f of definition.fields) {
     if (f.required && !mapping[f.key]) problems.push(`Choose the column for ${f.label}`);
@@ -64,9 +74,9 @@ export function unusedHeaders(headers: readonly string[], mapping: Record<string
 }
 
 /** A field key's label for the problems table ("" for a problem of the whole row). */
-export function fieldLabel(kind: ImportKindKey, key: string): string {
+export function fieldLabel(kind: ImportKindKey, key: string, traits?: Traits): string {
   if (!key) return 'whole row';
-  return importKind(kind).fields.find((f) => f.key === key)?.label ?? key;
+  return importKind(kind, traits ?? undefined).fields.find((f) => f.key === key)?.label ?? key;
 }
 
 /**

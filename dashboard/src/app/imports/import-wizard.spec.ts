@@ -13,7 +13,7 @@ const summary: ImportSummary = {
 const job = (over: Partial<ImportJob>): ImportJob => ({
   id: 5, kind: 'weights', scopeType: 'rabbitry', scopeId: 7, fileName: 'scale.csv', status: 'uploaded', encoding: 'utf-8', delimiter: ';',
   headers: ['Tattoo', 'Date', 'Weight'], sampleRows: [['BF101', '2026-11-20', '5 lb 12 oz']], suggestedMapping: { ear_id: 'Tattoo', weighed_on: 'Date', weight: 'Weight' },
-  processedRows: 0, totalRows: 0, summary: null, message: null, startedAt: '2026-11-30T10:00:00.000Z', finishedAt: null, userName: 'Wren Tallow',
+  evaluationTraits: null, processedRows: 0, totalRows: 0, progress: null, summary: null, message: null, startedAt: '2026-11-30T10:00:00.000Z', finishedAt: null, userName: 'Wren Tallow',
   ...over,
 });
 const pause = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -79,9 +79,11 @@ describe('ImportWizard', () => {
     await fixture.whenStable();
 
     await pause(550);
-    backend.expectOne('/api/rabbitries/7/imports/5').flush(job({ status: 'checking', processedRows: 2 }));
+    backend.expectOne('/api/rabbitries/7/imports/5').flush(job({ status: 'checking', processedRows: 2, progress: 0.6 }));
     await fixture.whenStable();
-    expect(el.textContent).toContain('Checking: 2 rows read so far');
+    expect(el.textContent).toContain('Checking: 2 rows read (60%)');
+    const bar = el.querySelector('mat-progress-bar[aria-label="Check progress"]')!;
+    expect([bar.getAttribute('mode'), bar.getAttribute('aria-valuenow')]).toEqual(['determinate', '60']);
     await pause(500);
     backend.expectOne('/api/rabbitries/7/imports/5').flush(job({ status: 'checked', processedRows: 3, totalRows: 3, summary }));
     await fixture.whenStable();
@@ -104,9 +106,14 @@ describe('ImportWizard', () => {
     await click('Import');
     const commit = backend.expectOne({ method: 'POST', url: '/api/rabbitries/7/imports/5/commit' });
     expect(commit.request.body).toEqual({ skipRowsWithErrors: true });
-    commit.flush(job({ status: 'committing', processedRows: 0, totalRows: 3, summary }));
+    commit.flush(job({ status: 'committing', processedRows: 0, totalRows: 3, progress: 0, summary }));
     await fixture.whenStable();
     await pause(550);
+    backend.expectOne('/api/rabbitries/7/imports/5').flush(job({ status: 'committing', processedRows: 1, totalRows: 3, progress: 0.75, summary }));
+    await fixture.whenStable();
+    expect(el.textContent).toContain('Importing: 1 of 1 new rows, 75%');
+    expect(el.querySelector('mat-progress-bar[aria-label="Import progress"]')?.getAttribute('aria-valuenow')).toBe('75');
+    await pause(500);
     backend.expectOne('/api/rabbitries/7/imports/5').flush(job({ status: 'done', processedRows: 3, totalRows: 3, summary, message: '1 new, 1 already present' }));
     await fixture.whenStable();
     expect(el.querySelector('.outcome')?.textContent).toBe('1 new, 1 already present');

@@ -73,14 +73,16 @@ export class ImportWizard {
   protected readonly job = signal<ImportJob | null>(null);
   protected readonly requestFailure = signal<string | null>(null);
 
-  protected readonly fields = computed(() => mappingFields(this.chosenKind()));
+  /** Evaluations: the trait columns of the herd's breed templates, known once the file is uploaded. */
+  private readonly traits = computed(() => this.job()?.evaluationTraits ?? null);
+  protected readonly fields = computed(() => mappingFields(this.chosenKind(), this.traits()));
   protected mapping = new FormGroup<Record<string, FormControl<string>>>({});
   private readonly mappingVersion = signal(0);
   protected readonly mappingValue = computed(() => {
     this.mappingVersion();
     return cleanMapping(this.mapping.getRawValue());
   });
-  protected readonly problems = computed(() => mappingProblems(this.chosenKind(), this.mappingValue()));
+  protected readonly problems = computed(() => mappingProblems(this.chosenKind(), this.mappingValue(), this.traits()));
   protected readonly unused = computed(() => unusedHeaders(this.job()?.headers ?? [], this.mappingValue()));
   protected readonly options = new FormGroup({
     dateOrder: new FormControl<'iso' | 'mdy'>(this.user()?.dateOrder ?? 'iso', { nonNullable: true }),
@@ -114,7 +116,7 @@ export class ImportWizard {
   private polling: Subscription | null = null;
 
   protected label(key: string): string {
-    return fieldLabel(this.chosenKind(), key);
+    return fieldLabel(this.chosenKind(), key, this.traits());
   }
 
   protected sample(header: string | undefined): string {
@@ -214,7 +216,7 @@ export class ImportWizard {
     this.uploadProgress.set(null);
     this.job.set(job);
     const controls: Record<string, FormControl<string>> = {};
-    for (const f of mappingFields(job.kind)) controls[f.key] = new FormControl(job.suggestedMapping[f.key] ?? '', { nonNullable: true });
+    for (const f of mappingFields(job.kind, job.evaluationTraits)) controls[f.key] = new FormControl(job.suggestedMapping[f.key] ?? '', { nonNullable: true });
     this.mapping = new FormGroup(controls);
     this.mapping.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => this.mappingVersion.update((v) => v + 1));
     this.mappingVersion.update((v) => v + 1);

@@ -7,12 +7,20 @@ const summary: ImportSummary = {
 };
 
 describe('import words', () => {
-  it('fills the bar when the rows are known and counts rows read when not', () => {
-    expect(progressOf({ status: 'committing', processedRows: 103, totalRows: 412 })).toEqual({
-      mode: 'determinate', percent: 25, text: 'Importing: 103 of 412 rows (25%)',
+  it('fills the bar by the share the API reports, counting rows read and rows written', () => {
+    expect(progressOf({ status: 'checking', processedRows: 12000, progress: 0.2475, summary: null })).toEqual({
+      mode: 'determinate', percent: 24, text: 'Checking: 12,000 rows read (24%)',
     });
-    expect(progressOf({ status: 'checking', processedRows: 12000, totalRows: 0 })).toEqual({
-      mode: 'indeterminate', percent: 0, text: 'Checking: 12,000 rows read so far',
+    expect(progressOf({ status: 'committing', processedRows: 103, progress: 0.25, summary: { ...summary, newRows: 412 } })).toEqual({
+      mode: 'determinate', percent: 25, text: 'Importing: 103 of 412 new rows, 25%',
+    });
+    expect(progressOf({ status: 'committing', processedRows: 0, progress: 0.2, summary: { ...summary, newRows: 412 } }).text).toBe('Importing: 20%');
+  });
+
+  it('shows 100% only once the step is over, and a moving bar when no share is known', () => {
+    expect(progressOf({ status: 'checking', processedRows: 415, progress: 1, summary: null }).percent).toBe(99);
+    expect(progressOf({ status: 'checking', processedRows: 12000, progress: null, summary: null })).toEqual({
+      mode: 'indeterminate', percent: 0, text: 'Checking: 12,000 rows so far',
     });
   });
 

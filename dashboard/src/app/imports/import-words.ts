@@ -25,24 +25,29 @@ export function kindLabel(kind: ImportKindKey): string {
 }
 
 export interface Progress {
-  /** Known total: a bar that fills; else a moving bar with the rows read so far. */
+  /** A share reported by the API: a bar that fills; else a moving bar with the rows so far. */
   mode: 'determinate' | 'indeterminate';
   percent: number;
   text: string;
 }
 
 /**
- * Progress of a running job from what the API reports: rows read (`processedRows`) of the rows
- * known from an earlier check (`totalRows`, 0 until the first check has finished). O(1).
+ * Progress of a running job from what the API reports: the share of the step done
+ * (`progress`: bytes of the file read while checking, rows written while importing) and the
+ * rows handled (`processedRows`), with the new rows of the check as the total of an import.
+ * The percentage is rounded down, so 100% only shows once the step has finished. O(1).
  */
-export function progressOf(job: Pick<ImportJob, 'status' | 'processedRows' | 'totalRows'>): Progress {
-  const verb = job.status === 'committing' ? 'Importing' : 'Checking';
-  const rows = job.processedRows.toLocaleString('en-US');
-  if (job.totalRows > 0 && job.processedRows <= job.totalRows) {
-    const percent = Math.round((job.processedRows / job.totalRows) * 100);
-    return { mode: 'determinate', percent, text: `${verb}: ${rows} of ${job.totalRows.toLocaleString('en-US')} rows (${percent}%)` };
+export function progressOf(job: Pick<ImportJob, 'status' | 'processedRows' | 'progress' | 'summary'>): Progress {
+  const n = (x: number) => x.toLocaleString('en-US');
+  const importing = job.status === 'committing';
+  if (job.progress === null) {
+    return { mode: 'indeterminate', percent: 0, text: `${importing ? 'Importing' : 'Checking'}: ${n(job.processedRows)} rows so far` };
   }
-  return { mode: 'indeterminate', percent: 0, text: `${verb}: ${rows} rows read so far` };
+  const percent = Math.min(99, Math.floor(job.progress * 100));
+  if (!importing) return { mode: 'determinate', percent, text: `Checking: ${n(job.processedRows)} rows read (${percent}%)` };
+  const total = job.summary?.newRows ?? 0;
+  const rows = job.processedRows > 0 && total > 0 ? `${n(Math.min(job.processedRows, total))} of ${n(total)} new rows, ` : '';
+  return { mode: 'determinate', percent, text: `Importing: ${rows}${percent}%` };
 }
 
 export interface SummaryCount {

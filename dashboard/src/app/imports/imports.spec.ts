@@ -8,7 +8,7 @@ import { Imports } from './imports';
 
 const done: ImportJob = {
   id: 3, kind: 'animals', scopeType: 'rabbitry', scopeId: 7, fileName: 'herd.csv', status: 'done', encoding: 'utf-8', delimiter: ',',
-  headers: [], sampleRows: [], suggestedMapping: {}, processedRows: 412, totalRows: 412, message: '0 new, 412 already present',
+  headers: [], sampleRows: [], suggestedMapping: {}, evaluationTraits: null, processedRows: 412, totalRows: 412, progress: null, message: '0 new, 412 already present',
   summary: { totalRows: 412, newRows: 0, alreadyPresent: 412, duplicatesInFile: 0, errorRows: 0, warningRows: 2, skippedRows: 0, stubsToCreate: 0, problems: [] },
   startedAt: '2026-11-30T10:00:00.000Z', finishedAt: '2026-11-30T10:00:04.000Z', userName: 'Wren Tallow',
 };
