@@ -78,8 +78,10 @@ export class ResultsImporter implements KindImporter<'results'> {
       this.staged.push({ id: s.id, name: s.name, showDate: s.showDate, location: s.location, sanctionNo: s.sanctionNo, judges: s.judges });
     }
     const existingIds = this.staged.map((s) => s.id);
-    if (existingIds.length) {
-      const rows: { k: string }[] = await this.db.query('SELECT LOWER(HEX(dedupe_key)) AS k FROM show_result WHERE show_id IN (?)', [existingIds]);
+    // Show by show, from the dedupe index alone: a club's million results on record never
+    // arrive as a million objects at once.
+    for (const showId of existingIds) {
+      const rows: { k: string }[] = await this.db.query('SELECT LOWER(HEX(dedupe_key)) AS k FROM show_result WHERE show_id = ?', [showId]);
       for (const r of rows) this.existingKeys.add(r.k);
     }
     this.out = createWriteStream(this.tsvPath, { highWaterMark: 1 << 20 });
