@@ -30,13 +30,5 @@ export async function chartPngDataUrl(source: ChartPngSource): Promise<string> {
   }
 }
 
-/** Saves a data URL as a file through a temporary link. */
-export function downloadDataUrl(fileName: string, url: string, doc: Document = document): void {
-  const link = doc.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  link.style.display = 'none';
-  doc.body.append(link);
-  link.click();
-  link.remove();
-}
+/** Saves a data URL as a file (the chart's PNG). */
+export { downloadUrl as downloadDataUrl } from '../records/csv-download';

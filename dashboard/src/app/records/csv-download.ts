@@ -8,6 +8,13 @@ import { toCsv, type CsvColumn } from '@shared/csv/to-csv';
 export function downloadCsv<T>(fileName: string, rows: readonly T[], columns: readonly CsvColumn<T>[], doc: Document = document): void {
   const blob = new Blob(['\uFEFF', toCsv(rows, columns)], { type: 'text/csv;charset=utf-8' });
   const url = URL.createObjectURL(blob);
+  downloadUrl(fileName, url, doc);
+  // Revoked after the click has been handled; revoking at once can cancel the download.
+  setTimeout(() => URL.revokeObjectURL(url), 0);
+}
+
+/** Saves what a URL (object or data URL) holds as a file, through a temporary link. */
+export function downloadUrl(fileName: string, url: string, doc: Document = document): void {
   const link = doc.createElement('a');
   link.href = url;
   link.download = fileName;
@@ -15,8 +22,6 @@ export function downloadCsv<T>(fileName: string, rows: readonly T[], columns: re
   doc.body.append(link);
   link.click();
   link.remove();
-  // Revoked after the click has been handled; revoking at once can cancel the download.
-  setTimeout(() => URL.revokeObjectURL(url), 0);
 }
 
 /** A file name from words and a date: "Quillmere Winter Show" → "quillmere-winter-show-2026-01-17.csv". */
