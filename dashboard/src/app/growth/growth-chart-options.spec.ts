@@ -35,9 +35,13 @@ describe('buildGrowthOptions', () => {
     const far = { ...reference('doe'), reachesDays: 420 };
     const adult = growthAnimal(1, 'BF177', { projection: { ...growthAnimal(1, 'BF177').projection!, ageDays: 365 } });
     const o = buildGrowthOptions({ reference: far, animals: [adult], seniorAgeDays: 365, unit: 'kg', theme });
-    expect(growthChartWeeks(far)).toBe(60);
+    // 420 days is 60 weeks, rounded up to the next 8-week tick.
+    expect(growthChartWeeks(far)).toBe(64);
     expect(growthChartWeeks(null)).toBe(36);
-    expect((o['xAxis'] as { max: number }).max).toBe(60);
+    expect(o['xAxis']).toMatchObject({ max: 64, interval: 8 });
+    // Two years of weighings: quarter-year ticks, the axis ending on one (104 = 8 × 13).
+    expect(growthChartWeeks({ ...far, reachesDays: 714 })).toBe(104);
+    expect(growthChartWeeks({ ...far, reachesDays: 700 })).toBe(104);
     const median = (o['series'] as Series[]).find((s) => s.name === 'Median (50th)')!;
     expect(median.markLine?.data.at(-1)).toMatchObject({ name: '12 months', xAxis: 52.1 });
     // The adult weighing at 287 days (41 weeks) is on the chart now.

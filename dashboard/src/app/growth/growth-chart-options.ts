@@ -21,9 +21,18 @@ export interface GrowthChartInput {
 /** The chart spans at least this many weeks, and further where the reference reaches. */
 export const GROWTH_MAX_WEEKS = 36;
 
-/** Weeks the chart spans: to where the reference reaches (senior ages included), at least 36. */
+/**
+ * Weeks between the age axis's ticks: 4 on the young chart, 8 up to 80 weeks, then 13 (a quarter
+ * year, so 26 and 52 weeks — six months and a year — are ticks). The axis ends on a tick, so
+ * no last label crowds the one before it.
+ */
+export const growthAxisStep = (weeks: number) => (weeks <= GROWTH_MAX_WEEKS ? 4 : weeks <= 80 ? 8 : 13);
+
+/** Weeks the chart spans: to where the reference reaches (senior ages included), at least 36, rounded up to a tick. */
 export function growthChartWeeks(reference: GrowthReferenceReport | null): number {
-  return Math.max(GROWTH_MAX_WEEKS, Math.ceil((reference?.reachesDays ?? 0) / 7));
+  const weeks = Math.max(GROWTH_MAX_WEEKS, Math.ceil((reference?.reachesDays ?? 0) / 7));
+  const step = growthAxisStep(weeks);
+  return Math.ceil(weeks / step) * step;
 }
 
 /** An age in whole months: 365 → "12 months", 243 → "8 months". */
@@ -161,7 +170,7 @@ export function buildGrowthOptions({ reference, animals, seniorAgeDays, unit, th
     legend: { type: narrow ? 'plain' : 'scroll', top: 0, left: 0, selectedMode: false, ...legendStyle(theme), data: legendData },
     grid: { left: 16, right: 24, top: 24 + 24 * legendRows, bottom: 52 },
     tooltip: { trigger: 'item', ...tooltipStyle(theme), formatter: tooltip },
-    xAxis: { type: 'value', min: 0, max: maxWeeks, name: 'Age (weeks)', nameLocation: 'middle', nameGap: 30, ...axisStyle(theme) },
+    xAxis: { type: 'value', min: 0, max: maxWeeks, interval: growthAxisStep(maxWeeks), name: 'Age (weeks)', nameLocation: 'middle', nameGap: 30, ...axisStyle(theme) },
     yAxis: { type: 'value', min: 0, name: `Weight (${unitName})`, nameLocation: 'middle', nameGap: 40, ...axisStyle(theme) },
     series: [...bandSeries, ...animalSeries, ...projectionSeries],
   };
