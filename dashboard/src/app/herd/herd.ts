@@ -19,6 +19,7 @@ import { debounceTime, distinctUntilChanged, map } from 'rxjs';
 import type { Animal, HerdPage } from '@shared/contracts/animals';
 import { AGE_CLASSES, AGE_CLASS_LABELS, ANIMAL_STATUSES, ANIMAL_STATUS_LABELS } from '@shared/domain/terms';
 import { BreedsApi } from '../breeds/breeds-api';
+import { SexFilter } from '../panels/sex-filter';
 import { localToday } from '../records/describe-age';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
 import { Session } from '../session/session';
@@ -58,6 +59,7 @@ import {
     MatSortModule,
     MatTableModule,
     LoadError,
+    SexFilter,
   ],
 })
 export class Herd {

@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSortModule, type Sort } from '@angular/material/sort';
@@ -11,9 +10,11 @@ import { provideEchartsCore } from 'ngx-echarts';
 import { LINE_CAUTIONS } from '@shared/domain/cautions';
 import { BreedsApi } from '../breeds/breeds-api';
 import { CautionsNote } from '../panels/cautions-note';
+import { DateRangeFilter } from '../panels/date-range-filter';
 import { injectChartTheme } from '../panels/chart-theme';
 import { PanelChart } from '../panels/panel-chart';
 import { lastValue, routedView } from '../panels/routed-view';
+import { SexFilter } from '../panels/sex-filter';
 import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { LoadError } from '../status/load-error';
@@ -32,7 +33,6 @@ import { linesApiParams, linesParams, linesViewFrom, MIN_N_CHOICES, type LinesVi
     MatButtonModule,
     MatButtonToggleModule,
     MatFormFieldModule,
-    MatInputModule,
     MatProgressBarModule,
     MatSelectModule,
     MatSortModule,
@@ -40,6 +40,8 @@ import { linesApiParams, linesParams, linesViewFrom, MIN_N_CHOICES, type LinesVi
     CautionsNote,
     LoadError,
     PanelChart,
+    SexFilter,
+    DateRangeFilter,
   ],
   providers: [provideEchartsCore({ echarts: () => import('./lines-echarts').then((m) => m.echarts) })],
 })
@@ -92,10 +94,6 @@ export class LineComparison {
 
   protected filter(key: 'breed' | 'sex' | 'from' | 'to', value: string | number | undefined): void {
     this.setView({ [key]: value === '' || value === 0 ? undefined : value });
-  }
-
-  protected dateFilter(key: 'from' | 'to', event: Event): void {
-    this.filter(key, (event.target as HTMLInputElement).value || undefined);
   }
 
   protected clearFilters(): void {

@@ -14,10 +14,12 @@ import type { ParentPlacement } from '@shared/contracts/analytics';
 import { SELECTION_CAUTIONS } from '@shared/domain/cautions';
 import { BreedsApi } from '../breeds/breeds-api';
 import { CautionsNote } from '../panels/cautions-note';
+import { DateRangeFilter } from '../panels/date-range-filter';
 import { injectChartTheme } from '../panels/chart-theme';
 import { PHONE_WIDTH, mediaMatches } from '../panels/media-query';
 import { PanelChart } from '../panels/panel-chart';
 import { lastValue, routedView } from '../panels/routed-view';
+import { SexFilter } from '../panels/sex-filter';
 import { sortRows, type RowOrder } from '../panels/sort-rows';
 import { csvFileName, downloadCsv } from '../records/csv-download';
 import { editsRecords, rabbitryRoleOf } from '../records/records-access';
@@ -37,7 +39,7 @@ const CHART_ROWS = 30;
   changeDetection: ChangeDetectionStrategy.OnPush,
   imports: [
     RouterLink, MatButtonModule, MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatProgressBarModule,
-    MatSelectModule, MatSortModule, MatTableModule, CautionsNote, LoadError, PanelChart,
+    MatSelectModule, MatSortModule, MatTableModule, CautionsNote, LoadError, PanelChart, SexFilter, DateRangeFilter,
   ],
   providers: [provideEchartsCore({ echarts: () => import('./sire-dam-echarts').then((m) => m.echarts) })],
 })
@@ -88,10 +90,6 @@ export class SireDamReport {
 
   protected filter<K extends keyof SireDamView>(key: K, value: SireDamView[K] | undefined): void {
     this.show(withSireDamFilter(this.view(), key, value));
-  }
-
-  protected dateFilter(key: 'from' | 'to', event: Event): void {
-    this.filter(key, (event.target as HTMLInputElement).value || undefined);
   }
 
   protected minEntries(event: Event): void {
