@@ -29,6 +29,3 @@ export async function chartPngDataUrl(source: ChartPngSource): Promise<string> {
     copy.dispose();
   }
 }
-
-/** Saves a data URL as a file (the chart's PNG). */
-export { downloadUrl as downloadDataUrl } from '../records/csv-download';

@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, output, si
 import { MatButtonModule } from '@angular/material/button';
 import type { ECElementEvent, ECharts, EChartsCoreOption } from 'echarts/core';
 import { NGX_ECHARTS_CONFIG, NgxEchartsDirective } from 'ngx-echarts';
+import { downloadUrl } from '../records/csv-download';
 import { injectChartTheme } from './chart-theme';
 
 /**
@@ -80,14 +81,14 @@ export class PanelChart {
     if (!chart) return;
     this.saving.set(true);
     try {
-      const [{ chartPngDataUrl, downloadDataUrl }, echarts] = await Promise.all([
+      const [{ chartPngDataUrl }, echarts] = await Promise.all([
         import('./chart-png'),
         typeof this.config.echarts === 'function' ? this.config.echarts() : this.config.echarts,
       ]);
       const url = await chartPngDataUrl({
         echarts, option: this.options(), width: chart.getWidth(), height: chart.getHeight(), background: this.theme().surface,
       });
-      downloadDataUrl(`${this.fileName()}.png`, url);
+      downloadUrl(`${this.fileName()}.png`, url);
     } finally {
       this.saving.set(false);
     }
